@@ -1,0 +1,108 @@
+import { Router, type Request } from "express";
+import { sql } from "drizzle-orm";
+import type { SessionInfo } from "../contracts/session";
+import type { Me } from "../contracts/staff";
+import type { Db } from "../db/client";
+import type { Realtime } from "../realtime/realtime";
+import type { Actor } from "../staff/staff.repository";
+import { requireStaff, actorOf } from "./guards";
+import type { AppPassport, SignInRefusal } from "./passport";
+import { SESSION_COOKIE } from "./session";
+
+export function toMe(actor: Actor): Me {
+  return {
+    id: actor.id,
+    displayName: actor.displayName,
+    email: actor.email,
+    role: actor.role,
+    school: { id: actor.schoolId, name: actor.schoolName },
+    department:
+      actor.departmentId && actor.departmentName ? { id: actor.departmentId, name: actor.departmentName } : null,
+  };
+}
+
+/** Only local paths: an open redirect after sign-in would hand a teacher to another site. */
+export function safeReturnTo(value: unknown): string | undefined {
+  if (typeof value !== "string" || value.length > 300) return undefined;
+  if (!value.startsWith("/") || value.startsWith("//") || value.startsWith("/\\")) return undefined;
+  if (value.startsWith("/auth/") || /[\u0000-\u001f]/.test(value)) return undefined;
+  return value;
+}
+
+interface AuthRouteDeps {
+  db: Db;
+  passport: AppPassport;
+  realtime: Pick<Realtime, "endSession" | "endStaff">;
+  demo: boolean;
+  secureCookies: boolean;
+  log: (msg: string, error?: unknown) => void;
+}
+
+export function authRoutes({ db, passport, realtime, demo, secureCookies, log }: AuthRouteDeps) {
+  const router = Router();
+
+  router.get("/auth/google", (req, res, next) => {
+    delete req.session.signInNotice;
+    const returnTo = safeReturnTo(req.query.returnTo);
+    if (returnTo) req.session.returnTo = returnTo;
+    passport.authenticate("google", { prompt: "select_account" })(req, res, next);
+  });
+
+  router.get("/auth/google/callback", (req, res, next) => {
+    if (typeof req.query.error === "string") {
+      req.session.signInNotice = { kind: req.query.error === "access_denied" ? "sign_in_cancelled" : "sign_in_failed" };
+      return res.redirect("/sign-in");
+    }
+    passport.authenticate("google", (error: unknown, user: Express.User | false, info?: SignInRefusal | { message?: string }) => {
+      if (error || !user) {
+        if (error) log("[auth] sign-in failed", error);
+        if (info && "kind" in info && info.kind === "not_invited") {
+          req.session.signInNotice = { kind: "not_invited", email: info.email };
+          return res.redirect("/sign-in/not-invited");
+        }
+        req.session.signInNotice = { kind: "sign_in_failed" };
+        return res.redirect("/sign-in");
+      }
+      const returnTo = req.session.returnTo;
+      // req.logIn regenerates the session (no fixation); returnTo is read before that.
+      req.logIn(user, (loginError) => {
+        if (loginError) return next(loginError);
+        res.redirect(returnTo ?? "/");
+      });
+    })(req, res, next);
+  });
+
+  const clearCookie = (res: import("express").Response) =>
+    res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: "lax", secure: secureCookies, path: "/" });
+
+  router.post("/auth/sign-out", (req, res, next) => {
+    const sessionId = req.sessionID;
+    req.session.destroy((error) => {
+      if (error) return next(error);
+      realtime.endSession(sessionId, "signed_out");
+      clearCookie(res).status(204).end();
+    });
+  });
+
+  router.post("/auth/sign-out-everywhere", requireStaff, async (req: Request, res, next) => {
+    const actor = actorOf(req);
+    try {
+      await db.execute(sql`delete from "session" where sess -> 'passport' ->> 'user' = ${actor.id}`);
+      realtime.endStaff(actor.id, "signed_out_everywhere");
+      clearCookie(res).status(204).end();
+    } catch (error) {
+      next(error);
+    }
+  });
+
+  router.get("/api/session", (req, res) => {
+    const body: SessionInfo = {
+      user: req.user ? toMe(req.user) : null,
+      notice: req.user ? null : (req.session.signInNotice ?? null),
+      demo,
+    };
+    res.set("Cache-Control", "no-store").json(body);
+  });
+
+  return router;
+}

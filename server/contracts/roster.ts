@@ -1,0 +1,79 @@
+import { z } from "zod";
+
+/**
+ * Pupils have no accounts: a roster holds display names only, a first name and an
+ * initial ("Amira K."). These rules are shared by the roster editor and the API.
+ */
+export const ROSTER_LIMITS = { nameLength: 30, entries: 60 } as const;
+
+export const ROSTER_NAME_PROBLEMS = ["blank", "too_long", "email", "full_name", "characters", "duplicate"] as const;
+export type RosterNameProblem = (typeof ROSTER_NAME_PROBLEMS)[number];
+
+export type RosterNameCheck =
+  | { ok: true; value: string }
+  | { ok: false; problem: Exclude<RosterNameProblem, "duplicate">; message: string };
+
+const ALLOWED = /^[\p{L}\p{M}\p{N} .'’-]+$/u;
+const INITIAL = /^\p{L}\.?$/u;
+
+/** Tidies spaces and checks one display name. */
+export function checkRosterName(raw: string): RosterNameCheck {
+  const value = raw.replace(/\s+/g, " ").trim();
+  if (!value) return { ok: false, problem: "blank", message: "This name is blank." };
+  if (value.length > ROSTER_LIMITS.nameLength)
+    return { ok: false, problem: "too_long", message: `Keep names to ${ROSTER_LIMITS.nameLength} characters or fewer.` };
+  if (value.includes("@") || /\.[a-z]{2,}$/i.test(value))
+    return { ok: false, problem: "email", message: "This looks like an e-mail address: use a first name and initial." };
+  if (!ALLOWED.test(value))
+    return { ok: false, problem: "characters", message: "Use letters, spaces, hyphens, apostrophes and full stops only." };
+  const words = value.split(" ");
+  if (words.length > 1 && !INITIAL.test(words[words.length - 1]!))
+    return {
+      ok: false,
+      problem: "full_name",
+      message: "This looks like a full name: use the first name and an initial, for example “Amira K.”.",
+    };
+  return { ok: true, value };
+}
+
+/** Key under which two names count as the same pupil ("Sam K" and "sam k." clash). */
+export const rosterNameKey = (name: string) => name.toLocaleLowerCase("en").replace(/\.$/, "");
+
+export const rosterNameSchema = z.string().transform((raw, ctx) => {
+  const check = checkRosterName(raw);
+  if (!check.ok) {
+    ctx.addIssue({ code: "custom", message: check.message, params: { problem: check.problem } });
+    return z.NEVER;
+  }
+  return check.value;
+});
+
+export const rosterInputSchema = z
+  .object({
+    names: z
+      .array(rosterNameSchema)
+      .max(ROSTER_LIMITS.entries, `A roster holds at most ${ROSTER_LIMITS.entries} names.`),
+  })
+  .superRefine(({ names }, ctx) => {
+    const firstSeen = new Map<string, number>();
+    names.forEach((name, i) => {
+      const key = rosterNameKey(name);
+      const first = firstSeen.get(key);
+      if (first === undefined) firstSeen.set(key, i);
+      else
+        ctx.addIssue({
+          code: "custom",
+          path: ["names", i],
+          message: `Same name as row ${first + 1}: add a letter to tell them apart.`,
+          params: { problem: "duplicate" },
+        });
+    });
+  });
+export type RosterInput = z.input<typeof rosterInputSchema>;
+
+export const rosterSchema = z.object({
+  classId: z.uuid(),
+  names: z.array(z.object({ id: z.uuid(), displayName: z.string() })),
+  updatedAt: z.string().nullable(),
+});
+export type Roster = z.infer<typeof rosterSchema>;

@@ -1,0 +1,48 @@
+/**
+ * The demo school. Every school, person and class here is invented; the `.example`
+ * domain is reserved for examples (RFC 2606), so no address can reach anyone.
+ */
+import type { StaffRole } from "../../contracts/staff";
+
+export const DEMO_SCHOOL = { name: "Brackenfold Academy", department: "Science" } as const;
+
+export interface DemoStaff {
+  key: "head" | "teacherA" | "teacherB" | "admin";
+  displayName: string;
+  email: string;
+  role: StaffRole;
+  inDepartment: boolean;
+  note: string;
+}
+
+export const DEMO_STAFF: readonly DemoStaff[] = [
+  { key: "teacherA", displayName: "Tom Ashdown", email: "tom.ashdown@brackenfold.example", role: "teacher", inDepartment: true, note: "Physics teacher" },
+  { key: "teacherB", displayName: "Priya Lindqvist", email: "priya.lindqvist@brackenfold.example", role: "teacher", inDepartment: true, note: "Science teacher" },
+  { key: "head", displayName: "Helen Marrable", email: "helen.marrable@brackenfold.example", role: "head_of_department", inDepartment: true, note: "Head of science" },
+  { key: "admin", displayName: "Gareth Pell", email: "gareth.pell@brackenfold.example", role: "admin", inDepartment: false, note: "School admin" },
+];
+
+/** Listed on the local sign-in page to show what an uninvited person sees. */
+export const DEMO_UNINVITED = { name: "Sam Reed", email: "sam.reed@elsewhere.example", note: "Not invited to the school" } as const;
+
+const FIRST_NAMES = [
+  "Aisha", "Ben", "Callum", "Dara", "Elif", "Finn", "Grace", "Hamza", "Isla", "Jonah", "Kiran", "Lena",
+  "Malik", "Nell", "Oscar", "Piper", "Quinn", "Rosa", "Sami", "Tegan", "Umar", "Vera", "Wren", "Yusuf",
+  "Zara", "Alfie", "Bea", "Cyrus", "Delia", "Ezra", "Freya", "Gus",
+];
+const INITIALS = "ABCDEFGHJKLMNPRSTW";
+
+/** A roster of `size` invented display names, different for each `offset`. */
+function roster(size: number, offset: number): string[] {
+  return Array.from({ length: size }, (_, i) => {
+    const first = FIRST_NAMES[(i * 7 + offset) % FIRST_NAMES.length]!;
+    const initial = INITIALS[(i * 5 + offset * 3) % INITIALS.length]!;
+    return `${first} ${initial}.`;
+  }).filter((name, i, all) => all.indexOf(name) === i);
+}
+
+export const DEMO_CLASSES = [
+  { teacher: "teacherA", name: "10A Physics", yearGroup: "Year 10", subject: "Physics", roster: roster(26, 0) },
+  { teacher: "teacherA", name: "12 Physics, set 1", yearGroup: "Year 12", subject: "Physics", roster: roster(14, 5) },
+  { teacher: "teacherB", name: "11C Combined Science", yearGroup: "Year 11", subject: "Combined science", roster: roster(28, 11) },
+] as const satisfies readonly { teacher: DemoStaff["key"]; name: string; yearGroup: string; subject: string; roster: string[] }[];

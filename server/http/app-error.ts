@@ -1,0 +1,30 @@
+import type { ErrorCode, FieldErrors } from "../contracts/errors";
+
+const STATUS: Record<ErrorCode, number> = {
+  bad_request: 400,
+  validation_failed: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  class_name_taken: 409,
+  last_admin: 409,
+  protocol_mismatch: 400,
+  internal_error: 500,
+};
+
+/** The one error type handlers throw; the error middleware turns it into `{ error }` JSON. */
+export class AppError extends Error {
+  readonly status: number;
+  constructor(
+    readonly code: ErrorCode,
+    message: string,
+    readonly fields?: FieldErrors,
+  ) {
+    super(message);
+    this.status = STATUS[code];
+  }
+}
+
+export const notFound = (what = "That page") => new AppError("not_found", `${what} was not found.`);
+export const forbidden = (message = "Your role does not allow this.") => new AppError("forbidden", message);
+export const unauthenticated = () => new AppError("unauthenticated", "Sign in to continue.");

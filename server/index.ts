@@ -1,0 +1,82 @@
+/**
+ * `npm start`. In demo mode (the default) it starts the whole embedded stack with demo data;
+ * with LINKLEAP_MODE=production it serves the built client against the configured services.
+ */
+import { resolve } from "node:path";
+import { createApp } from "./app";
+import { parseEnv } from "./config/env";
+import { connectDatabase } from "./db/client";
+import { migrateDatabase } from "./db/migrate";
+import { describeStack, startStack } from "./devstack/stack";
+import { projectPath } from "./paths";
+
+async function main() {
+  const env = parseEnv();
+  const clientDir = projectPath("dist", "client");
+  let stop: () => Promise<void>;
+
+  if (env.LINKLEAP_MODE === "demo") {
+    const dataDir = resolve(env.LINKLEAP_DATA_DIR);
+    const stack = await startStack({
+      dataDir,
+      host: env.HOST,
+      port: env.PORT,
+      pgPort: env.PG_PORT,
+      signInPort: env.SIGN_IN_PORT,
+      smtpPort: env.LOCAL_SMTP_PORT,
+      publicUrl: env.PUBLIC_URL,
+      buildClient: process.env.LINKLEAP_SKIP_BUILD !== "1",
+      clientDir,
+      sessionSecret: env.SESSION_SECRET,
+      stopPostgresOnExit: true,
+    });
+    console.log(describeStack(stack, dataDir));
+    stop = stack.stop;
+  } else {
+    const database = connectDatabase(env.DATABASE_URL!);
+    await migrateDatabase(database.pool);
+    const server = createApp({
+      database,
+      config: {
+        publicUrl: env.PUBLIC_URL!,
+        demo: false,
+        sessionSecret: env.SESSION_SECRET!,
+        oauth: {
+          clientID: env.GOOGLE_CLIENT_ID!,
+          clientSecret: env.GOOGLE_CLIENT_SECRET!,
+          authorizationURL: env.GOOGLE_AUTHORIZATION_URL ?? "https://accounts.google.com/o/oauth2/v2/auth",
+          tokenURL: env.GOOGLE_TOKEN_URL ?? "https://oauth2.googleapis.com/token",
+          userProfileURL: env.GOOGLE_USERINFO_URL ?? "https://openidconnect.googleapis.com/v1/userinfo",
+        },
+        clientDir,
+        trustProxy: 1,
+      },
+    });
+    await server.listen(env.PORT, env.HOST);
+    console.log(`Linkleap is listening on ${env.HOST}:${env.PORT} (public address ${env.PUBLIC_URL})`);
+    stop = async () => {
+      await server.close();
+      await database.close();
+    };
+  }
+
+  let stopping = false;
+  const shutdown = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    console.log(`\n${signal}: stopping Linkleap…`);
+    stop()
+      .then(() => process.exit(0))
+      .catch((error) => {
+        console.error(error);
+        process.exit(1);
+      });
+  };
+  process.on("SIGINT", () => shutdown("SIGINT"));
+  process.on("SIGTERM", () => shutdown("SIGTERM"));
+}
+
+main().catch((error) => {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+});
