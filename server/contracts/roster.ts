@@ -14,11 +14,15 @@ export type RosterNameCheck =
   | { ok: false; problem: Exclude<RosterNameProblem, "duplicate">; message: string };
 
 const ALLOWED = /^[\p{L}\p{M}\p{N} .'’-]+$/u;
-const INITIAL = /^\p{L}\.?$/u;
+// An initial, optionally with an apostrophe prefix as in "O'N.".
+const INITIAL = /^\p{L}(?:['’]\p{L})?\.?$/u;
+
+/** Collapses runs of spaces and trims, as every stored display name is. */
+export const tidyRosterName = (raw: string) => raw.replace(/\s+/g, " ").trim();
 
 /** Tidies spaces and checks one display name. */
 export function checkRosterName(raw: string): RosterNameCheck {
-  const value = raw.replace(/\s+/g, " ").trim();
+  const value = tidyRosterName(raw);
   if (!value) return { ok: false, problem: "blank", message: "This name is blank." };
   if (value.length > ROSTER_LIMITS.nameLength)
     return { ok: false, problem: "too_long", message: `Keep names to ${ROSTER_LIMITS.nameLength} characters or fewer.` };
@@ -39,6 +43,7 @@ export function checkRosterName(raw: string): RosterNameCheck {
 /** Key under which two names count as the same pupil ("Sam K" and "sam k." clash). */
 export const rosterNameKey = (name: string) => name.toLocaleLowerCase("en").replace(/\.$/, "");
 
+/** One name, tidied, or an issue naming the problem. */
 export const rosterNameSchema = z.string().transform((raw, ctx) => {
   const check = checkRosterName(raw);
   if (!check.ok) {
@@ -48,27 +53,36 @@ export const rosterNameSchema = z.string().transform((raw, ctx) => {
   return check.value;
 });
 
-export const rosterInputSchema = z
-  .object({
-    names: z
-      .array(rosterNameSchema)
-      .max(ROSTER_LIMITS.entries, `A roster holds at most ${ROSTER_LIMITS.entries} names.`),
-  })
-  .superRefine(({ names }, ctx) => {
-    const firstSeen = new Map<string, number>();
-    names.forEach((name, i) => {
-      const key = rosterNameKey(name);
-      const first = firstSeen.get(key);
-      if (first === undefined) firstSeen.set(key, i);
-      else
-        ctx.addIssue({
-          code: "custom",
-          path: ["names", i],
-          message: `Same name as row ${first + 1}: add a letter to tell them apart.`,
-          params: { problem: "duplicate" },
-        });
-    });
-  });
+/**
+ * A whole roster: every row is checked (blank, too long, e-mail, full name, duplicate) in one
+ * pass, so a teacher sees all the problems at once, each on its own row.
+ */
+export const rosterInputSchema = z.object({
+  names: z
+    .array(z.string({ error: "Each name must be text." }))
+    .max(ROSTER_LIMITS.entries, `A roster holds at most ${ROSTER_LIMITS.entries} names.`)
+    .superRefine((names, ctx) => {
+      const firstSeen = new Map<string, number>();
+      names.forEach((raw, i) => {
+        const check = checkRosterName(raw);
+        if (!check.ok) {
+          ctx.addIssue({ code: "custom", path: [i], message: check.message, params: { problem: check.problem } });
+          return;
+        }
+        const key = rosterNameKey(check.value);
+        const first = firstSeen.get(key);
+        if (first === undefined) firstSeen.set(key, i);
+        else
+          ctx.addIssue({
+            code: "custom",
+            path: [i],
+            message: `Same name as row ${first + 1}: add a letter to tell them apart.`,
+            params: { problem: "duplicate" },
+          });
+      });
+    })
+    .transform((names) => names.map(tidyRosterName)),
+});
 export type RosterInput = z.input<typeof rosterInputSchema>;
 
 export const rosterSchema = z.object({

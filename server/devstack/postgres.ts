@@ -10,10 +10,11 @@
  */
 import { execFile, spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { existsSync, mkdirSync, readFileSync, readdirSync, writeFileSync, chmodSync, statSync } from "node:fs";
+import { chmodSync, existsSync, mkdirSync, readFileSync, readdirSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { promisify } from "node:util";
 import lockfile from "proper-lockfile";
+import { aptInstall } from "./apt";
 import pg from "pg";
 
 const run = promisify(execFile);
@@ -60,22 +61,8 @@ export function findPostgresBin(): string | undefined {
 export async function ensurePostgresInstalled(log: (line: string) => void = console.log): Promise<string> {
   const found = findPostgresBin();
   if (found) return found;
-  log("PostgreSQL server not found: installing Debian's postgresql package (apt-get)…");
-  const prefix = isRoot() ? [] : ["sudo", "-n"];
-  const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
-  const steps = [
-    [...prefix, "apt-get", "update"],
-    [...prefix, "apt-get", "install", "-y", "--no-install-recommends", "postgresql"],
-  ];
-  for (const [cmd, ...args] of steps) {
-    const result = spawnSync(cmd!, args, { stdio: "inherit", env });
-    if (result.status !== 0) {
-      throw new Error(
-        `Could not install PostgreSQL (${[cmd, ...args].join(" ")} exited ${result.status}). ` +
-          "Install Debian's postgresql package, or set DATABASE_URL to an existing server.",
-      );
-    }
-  }
+  log("PostgreSQL server not found on this machine.");
+  aptInstall(["postgresql"], log);
   const bin = findPostgresBin();
   if (!bin) throw new Error("PostgreSQL was installed but no server binaries were found under /usr/lib/postgresql.");
   return bin;
@@ -137,7 +124,7 @@ async function initCluster(bin: string, opts: ClusterOptions, log: (line: string
       "--no-instructions",
     ]);
   } finally {
-    spawnSync("rm", ["-f", pwfile]);
+    rmSync(pwfile, { force: true });
   }
   const creds = { user: SUPERUSER, password };
   writeFileSync(join(opts.dir, "credentials.json"), JSON.stringify(creds), { mode: 0o600 });

@@ -1,0 +1,154 @@
+/**
+ * Every class, department and staff route against every kind of caller. Teacher A owns the
+ * class under test; teacher B and the head of department are in the same department; another
+ * head leads a different department; a teacher at another school; the school admin.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { ApiErrorBody } from "../../server/contracts/errors";
+import { PEOPLE, seedFixture, type Fixture, type PersonKey } from "../support/fixtures";
+import { HttpAgent, signIn } from "../support/http-agent";
+import { createTestDatabase, type TestDatabase } from "../support/test-database";
+import { startTestStack, type TestStack } from "../support/test-stack";
+
+type Caller = "anonymous" | PersonKey;
+const CALLERS: Caller[] = ["anonymous", "teacherA", "teacherB", "head", "otherHead", "elsewhere", "admin"];
+
+interface RouteCase {
+  route: string;
+  method: "GET" | "POST" | "PATCH" | "PUT";
+  path: (f: Fixture) => string;
+  body?: (caller: Caller) => unknown;
+  expected: Record<Caller, number>;
+}
+
+const ownerOnly = (ownerStatus: number): Record<Caller, number> => ({
+  anonymous: 401,
+  teacherA: ownerStatus,
+  teacherB: 404,
+  head: 403, // sees the class, may not change it
+  otherHead: 404,
+  elsewhere: 404,
+  admin: 403,
+});
+const readable: Record<Caller, number> = { ...ownerOnly(200), head: 200 };
+const anyTeacher = (status: number): Record<Caller, number> => ({
+  anonymous: 401,
+  teacherA: status,
+  teacherB: status,
+  head: status,
+  otherHead: status,
+  elsewhere: status,
+  admin: 403,
+});
+
+const ROUTES: RouteCase[] = [
+  { route: "GET /api/classes", method: "GET", path: () => "/api/classes", expected: anyTeacher(200) },
+  {
+    route: "POST /api/classes",
+    method: "POST",
+    path: () => "/api/classes",
+    body: (caller) => ({ name: `New class of ${caller}`, yearGroup: "Year 9", subject: "Physics" }),
+    expected: anyTeacher(201),
+  },
+  { route: "GET /api/classes/:id", method: "GET", path: (f) => `/api/classes/${f.classA}`, expected: readable },
+  {
+    route: "PATCH /api/classes/:id",
+    method: "PATCH",
+    path: (f) => `/api/classes/${f.classA}`,
+    body: (caller) => ({ name: `Renamed by ${caller}` }),
+    expected: ownerOnly(200),
+  },
+  { route: "POST /api/classes/:id/archive", method: "POST", path: (f) => `/api/classes/${f.classA}/archive`, expected: ownerOnly(200) },
+  { route: "POST /api/classes/:id/restore", method: "POST", path: (f) => `/api/classes/${f.classA}/restore`, expected: ownerOnly(200) },
+  { route: "GET /api/classes/:id/roster", method: "GET", path: (f) => `/api/classes/${f.classA}/roster`, expected: readable },
+  {
+    route: "PUT /api/classes/:id/roster",
+    method: "PUT",
+    path: (f) => `/api/classes/${f.classA}/roster`,
+    body: () => ({ names: ["Iris P.", "Jude K.", "Kofi M.", "Lola B."] }),
+    expected: ownerOnly(200),
+  },
+  {
+    route: "GET /api/department/classes",
+    method: "GET",
+    path: () => "/api/department/classes",
+    expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 200, otherHead: 200, elsewhere: 403, admin: 403 },
+  },
+  {
+    route: "GET /api/staff",
+    method: "GET",
+    path: () => "/api/staff",
+    expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 403, otherHead: 403, elsewhere: 403, admin: 200 },
+  },
+  {
+    route: "PATCH /api/staff/:id",
+    method: "PATCH",
+    path: (f) => `/api/staff/${f.staffIds.teacherB}`,
+    body: () => ({ role: "teacher" }),
+    expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 403, otherHead: 403, elsewhere: 403, admin: 200 },
+  },
+];
+
+let database: TestDatabase;
+let stack: TestStack;
+let fixture: Fixture;
+const agents = new Map<Caller, HttpAgent>();
+
+beforeAll(async () => {
+  database = await createTestDatabase();
+  fixture = await seedFixture(database.db);
+  stack = await startTestStack(database);
+  for (const caller of CALLERS) {
+    const agent = new HttpAgent(stack.url);
+    if (caller !== "anonymous") await signIn(agent, PEOPLE[caller].email);
+    agents.set(caller, agent);
+  }
+});
+afterAll(async () => {
+  await stack?.close();
+  await database?.drop();
+});
+
+describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
+  it.each(CALLERS)("as %s", async (caller) => {
+    const agent = agents.get(caller)!;
+    const { status, body: reply } = await agent.json<unknown>(path(fixture), { method, json: body?.(caller) });
+    expect(status).toBe(expected[caller]);
+    if (status >= 400) {
+      // Refusals carry an error code and nothing about the resource.
+      const error = reply as ApiErrorBody;
+      expect(Object.keys(error)).toEqual(["error"]);
+      expect(error.error.code).toBe({ 401: "unauthenticated", 403: "forbidden", 404: "not_found" }[status]);
+      expect(JSON.stringify(reply)).not.toContain(fixture.classA);
+      expect(JSON.stringify(reply)).not.toContain("Physics");
+    }
+  });
+});
+
+describe("what each caller sees", () => {
+  it("someone else's class and a class that does not exist look exactly the same", async () => {
+    const agent = agents.get("teacherB")!;
+    const theirs = await agent.json(`/api/classes/${fixture.classA}`);
+    const missing = await agent.json("/api/classes/00000000-0000-4000-8000-000000000000");
+    const notAnId = await agent.json("/api/classes/not-an-id");
+    expect(theirs).toEqual(missing);
+    expect(notAnId).toEqual(missing);
+  });
+
+  it("a teacher's list holds only their own classes", async () => {
+    const { body } = await agents.get("teacherB")!.json<{ id: string; teacher: { id: string } }[]>("/api/classes");
+    expect(body.length).toBeGreaterThan(0);
+    expect(body.every((c) => c.teacher.id === fixture.staffIds.teacherB)).toBe(true);
+    expect(body.map((c) => c.id)).not.toContain(fixture.classA);
+  });
+
+  it("the head of department sees the department's classes read-only, and no other department's or school's", async () => {
+    const { body } = await agents.get("head")!.json<{ id: string; access: string }[]>("/api/department/classes");
+    const ids = body.map((c) => c.id);
+    expect(ids).toEqual(expect.arrayContaining([fixture.classA, fixture.classB]));
+    expect(ids).not.toContain(fixture.classElsewhere);
+    expect(body.find((c) => c.id === fixture.classA)!.access).toBe("department");
+    const other = await agents.get("otherHead")!.json<{ id: string }[]>("/api/department/classes");
+    expect(other.body.map((c) => c.id)).not.toContain(fixture.classA);
+  });
+});

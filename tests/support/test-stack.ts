@@ -1,0 +1,83 @@
+import { createServer } from "node:net";
+import { createApp, type LinkleapServer } from "../../server/app";
+import type { Database } from "../../server/db/client";
+import { createSignInProvider, signInProviderEndpoints, type ProviderAccount, type SignInProvider } from "../../server/devstack/sign-in-provider";
+import { OUTSIDER, PEOPLE } from "./fixtures";
+
+export const TEST_SESSION_SECRET = "test-secret-that-is-long-enough-for-the-schema-1234";
+
+/** A port nobody is using right now (the app must know its own address before it listens). */
+export function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.unref();
+    server.on("error", reject);
+    server.listen(0, "127.0.0.1", () => {
+      const { port } = server.address() as { port: number };
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+export interface TestStack {
+  url: string;
+  port: number;
+  providerUrl: string;
+  server: LinkleapServer;
+  provider: SignInProvider;
+  /** Stops the app (not the provider) so a test can start another on the same port and database. */
+  restartApp(): Promise<void>;
+  close(): Promise<void>;
+}
+
+const defaultAccounts: ProviderAccount[] = [
+  ...Object.values(PEOPLE).map((p) => ({ email: p.email, name: p.name })),
+  { email: OUTSIDER.email, name: OUTSIDER.name },
+];
+
+/** The real app and the local sign-in provider on loopback, against a test database. */
+export async function startTestStack(database: Database, options: { clientDir?: string | null; accounts?: ProviderAccount[] } = {}): Promise<TestStack> {
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  const provider = createSignInProvider({
+    clientId: "linkleap-test",
+    clientSecret: "test-client-secret",
+    redirectUris: [`${url}/auth/google/callback`],
+    accounts: options.accounts ?? defaultAccounts,
+  });
+  const providerAddress = await provider.listen(0);
+  const providerUrl = `http://127.0.0.1:${providerAddress.port}`;
+
+  const makeApp = () =>
+    createApp({
+      database,
+      config: {
+        publicUrl: url,
+        demo: true,
+        sessionSecret: TEST_SESSION_SECRET,
+        oauth: { clientID: "linkleap-test", clientSecret: "test-client-secret", ...signInProviderEndpoints(providerUrl) },
+        clientDir: options.clientDir ?? null,
+        pruneSessions: false,
+      },
+      log: () => {},
+    });
+
+  const stack: TestStack = {
+    url,
+    port,
+    providerUrl,
+    provider,
+    server: makeApp(),
+    async restartApp() {
+      await stack.server.close();
+      stack.server = makeApp();
+      await stack.server.listen(port);
+    },
+    async close() {
+      await stack.server.close();
+      await provider.close();
+    },
+  };
+  await stack.server.listen(port);
+  return stack;
+}
