@@ -109,6 +109,7 @@ export function createApp({ config, database, log = defaultLog }: AppDeps): Link
       passport,
       realtime,
       demo: config.demo,
+      publicUrl,
       secureCookies: secure,
       log,
     }),

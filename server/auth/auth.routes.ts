@@ -34,14 +34,19 @@ interface AuthRouteDeps {
   passport: AppPassport;
   realtime: Pick<Realtime, "endSession" | "endStaff">;
   demo: boolean;
+  publicUrl: string;
   secureCookies: boolean;
   log: (msg: string, error?: unknown) => void;
 }
 
-export function authRoutes({ db, passport, realtime, demo, secureCookies, log }: AuthRouteDeps) {
+export function authRoutes({ db, passport, realtime, demo, publicUrl, secureCookies, log }: AuthRouteDeps) {
   const router = Router();
+  const publicHost = new URL(publicUrl).host;
 
   router.get("/auth/google", (req, res, next) => {
+    // The provider returns to PUBLIC_URL; start from the same host, or the session cookie
+    // that holds the state would not come back (localhost vs 127.0.0.1).
+    if (req.headers.host !== publicHost) return res.redirect(`${publicUrl}${req.originalUrl}`);
     delete req.session.signInNotice;
     const returnTo = safeReturnTo(req.query.returnTo);
     if (returnTo) req.session.returnTo = returnTo;

@@ -1,3 +1,4 @@
+import { request } from "node:http";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { SessionInfo } from "../../server/contracts/session";
@@ -110,5 +111,24 @@ describe("sign-in through the local OAuth2 provider", () => {
 
     const again = new HttpAgent(stack.url);
     expect((await signIn(again, "hal.reed@northfen.example", { name: "Hal Reed" })).finalLocation).toBe("/sign-in/not-invited");
+  });
+});
+
+describe("the sign-in entry point", () => {
+  it("moves a browser that arrived by another name for this host to the public address first", async () => {
+    // Same server, reached as "localhost": the Host header is what differs.
+    const { status, location } = await new Promise<{ status: number; location?: string }>((resolve, reject) => {
+      const req = request(
+        { host: "127.0.0.1", port: stack.port, path: "/auth/google?returnTo=%2Fclasses", headers: { host: `localhost:${stack.port}` } },
+        (res) => {
+          res.resume();
+          resolve({ status: res.statusCode!, location: res.headers.location });
+        },
+      );
+      req.on("error", reject);
+      req.end();
+    });
+    expect(status).toBe(302);
+    expect(location).toBe(`${stack.url}/auth/google?returnTo=%2Fclasses`);
   });
 });

@@ -1,0 +1,95 @@
+/**
+ * In a real browser (Debian's chromium via playwright-core) against the real server and
+ * Postgres: the demo teacher signs in through the local provider, creates a class, sees it
+ * listed, reloads, and it is still there.
+ */
+import type { Browser } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DEMO_STAFF } from "../../server/db/seed/demo-data";
+import { seedDemo } from "../../server/db/seed/seed-demo";
+import { DEMO_UNINVITED } from "../../server/db/seed/demo-data";
+import { keepScreenshot, launchBrowser } from "../support/browser";
+import { buildClientForTests } from "../support/client-build";
+import { createTestDatabase, type TestDatabase } from "../support/test-database";
+import { startTestStack, type TestStack } from "../support/test-stack";
+
+const teacher = DEMO_STAFF.find((s) => s.key === "teacherA")!;
+let database: TestDatabase;
+let stack: TestStack;
+let browser: Browser;
+
+beforeAll(async () => {
+  const clientDir = await buildClientForTests();
+  database = await createTestDatabase();
+  await seedDemo(database.db);
+  stack = await startTestStack(database, {
+    clientDir,
+    accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
+  });
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await stack?.close();
+  await database?.drop();
+});
+
+describe("a teacher's classes in the browser", () => {
+  it("signs in as the demo teacher, creates a class, and finds it again after a reload", async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    const problems: string[] = [];
+    page.on("pageerror", (e) => problems.push(e.message));
+    page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
+
+    // Signed out, any page leads to sign-in.
+    await page.goto(`${stack.url}/classes`);
+    await page.waitForURL(/\/sign-in/);
+    await keepScreenshot(page, "e2e", "01-sign-in");
+
+    await page.getByRole("link", { name: "Sign in with your school account" }).or(page.getByRole("button", { name: "Sign in with your school account" })).click();
+    await page.waitForURL(`${stack.providerUrl}/**`);
+    await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
+    // Back where the teacher was going.
+    await page.waitForURL(`${stack.url}/classes`);
+    await expect(page.getByRole("heading", { name: "Your classes" }).isVisible()).resolves.toBe(true);
+
+    // The demo classes are there.
+    await page.getByText("10A Physics").first().waitFor();
+
+    await page.getByRole("button", { name: "New class" }).click();
+    // Submitting empty shows the message next to the field, and saves nothing.
+    await page.getByLabel("Class name").fill("");
+    await page.getByRole("button", { name: "Create class" }).click();
+    await page.getByText(/Give the class name/).first().waitFor();
+
+    await page.getByLabel("Class name").fill("9Q Physics");
+    await page.getByLabel("Year group").fill("Year 9");
+    await page.getByLabel("Subject").fill("Physics");
+    await page.getByRole("button", { name: "Create class" }).click();
+    await page.getByRole("link", { name: /9Q Physics/ }).first().waitFor();
+    await keepScreenshot(page, "e2e", "02-class-created");
+
+    await page.reload();
+    await page.getByRole("link", { name: /9Q Physics/ }).first().waitFor();
+    await keepScreenshot(page, "e2e", "03-after-reload");
+
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("works on a narrow phone screen: the class list fits without sideways scrolling", async () => {
+    const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await page.goto(`${stack.url}/sign-in`);
+    await page.getByRole("link", { name: "Sign in with your school account" }).or(page.getByRole("button", { name: "Sign in with your school account" })).click();
+    await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
+    await page.waitForURL(`${stack.url}/`);
+    await page.goto(`${stack.url}/classes`);
+    await page.getByText("10A Physics").first().waitFor();
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await keepScreenshot(page, "e2e", "04-phone-classes");
+    await context.close();
+  });
+});
