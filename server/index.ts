@@ -2,7 +2,8 @@
  * `npm start`. In demo mode (the default) it starts the whole embedded stack with demo data;
  * with LINKLEAP_MODE=production it serves the built client against the configured services.
  */
-import { resolve } from "node:path";
+import { existsSync } from "node:fs";
+import { join, resolve } from "node:path";
 import { createApp } from "./app";
 import { parseEnv } from "./config/env";
 import { connectDatabase } from "./db/client";
@@ -33,6 +34,9 @@ async function main() {
     console.log(describeStack(stack, dataDir));
     stop = stack.stop;
   } else {
+    if (!existsSync(join(clientDir, "index.html"))) {
+      throw new Error("No built client in dist/client: run `npm run build` before starting in production mode.");
+    }
     const database = connectDatabase(env.DATABASE_URL!);
     await migrateDatabase(database.pool);
     const server = createApp({
