@@ -1,0 +1,40 @@
+import { Outlet, ScrollRestoration } from "react-router";
+import { SkipLink } from "@/components/layout/skip-link";
+import { Button } from "@/components/ui/button";
+import { ReloadIcon } from "@/components/ui/icons";
+import { Notice } from "@/components/ui/notice";
+import { useSession } from "@/features/auth/api/get-session";
+import { useSessionSocket } from "@/features/auth/hooks/use-session-socket";
+import { useRouteFocus } from "@/hooks/use-route-focus";
+
+/** Wraps every page: the skip link, the session socket, and the "reload, this page is out of date" banner. */
+export function RootLayout() {
+  const session = useSession();
+  const socketStatus = useSessionSocket(session.data?.user?.id);
+  useRouteFocus();
+
+  return (
+    <>
+      <SkipLink />
+      {socketStatus === "outdated" ? (
+        <div className="border-b border-warn bg-warn-soft px-4 py-2">
+          <Notice
+            tone="warn"
+            live="alert"
+            className="mx-auto max-w-page border-0 bg-transparent px-0"
+            title="This page is out of date"
+            actions={
+              <Button variant="primary" icon={<ReloadIcon />} onClick={() => window.location.reload()}>
+                Reload the page
+              </Button>
+            }
+          >
+            <p>Linkleap has been updated since this page was opened. Reload it to keep working; nothing you have saved is lost.</p>
+          </Notice>
+        </div>
+      ) : null}
+      <Outlet />
+      <ScrollRestoration />
+    </>
+  );
+}

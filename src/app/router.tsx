@@ -1,0 +1,36 @@
+import { createBrowserRouter } from "react-router";
+import { RouteErrorBoundary } from "@/components/errors/route-error-boundary";
+import { LoadingState } from "@/components/ui/spinner";
+import { AppShell } from "./layouts/app-shell";
+import { RootLayout } from "./layouts/root-layout";
+
+/**
+ * Every page is its own chunk (route `lazy`), so the first load carries only the shell.
+ * Each page has its own error boundary: a failure there leaves the header and navigation working.
+ */
+export function createRouter() {
+  return createBrowserRouter([
+    {
+      Component: RootLayout,
+      ErrorBoundary: RouteErrorBoundary,
+      // Shown while the first page's code arrives.
+      HydrateFallback: () => <LoadingState label="Loading Linkleap…" className="justify-center py-24" />,
+      children: [
+        { path: "sign-in", lazy: () => import("./routes/sign-in"), ErrorBoundary: RouteErrorBoundary },
+        { path: "sign-in/not-invited", lazy: () => import("./routes/not-invited"), ErrorBoundary: RouteErrorBoundary },
+        {
+          Component: AppShell,
+          ErrorBoundary: RouteErrorBoundary,
+          children: [
+            { index: true, lazy: () => import("./routes/home"), ErrorBoundary: RouteErrorBoundary },
+            { path: "classes", lazy: () => import("./routes/classes"), ErrorBoundary: RouteErrorBoundary },
+            { path: "classes/:classId", lazy: () => import("./routes/class-detail"), ErrorBoundary: RouteErrorBoundary },
+            { path: "department", lazy: () => import("./routes/department"), ErrorBoundary: RouteErrorBoundary },
+            { path: "staff", lazy: () => import("./routes/staff"), ErrorBoundary: RouteErrorBoundary },
+            { path: "*", lazy: () => import("./routes/not-found"), ErrorBoundary: RouteErrorBoundary },
+          ],
+        },
+      ],
+    },
+  ]);
+}

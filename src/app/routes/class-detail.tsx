@@ -1,0 +1,117 @@
+import { useState } from "react";
+import { useParams } from "react-router";
+import type { ClassSummary } from "@contracts/classes";
+import { Badge } from "@/components/ui/badge";
+import { ButtonLink } from "@/components/ui/button";
+import { ErrorState } from "@/components/ui/error-state";
+import { ArchiveIcon, ArrowLeftIcon, LockIcon } from "@/components/ui/icons";
+import { Notice } from "@/components/ui/notice";
+import { PageHeader } from "@/components/ui/page-header";
+import { SkeletonList } from "@/components/ui/skeleton";
+import { UnsavedChangesDialog } from "@/components/ui/unsaved-changes-dialog";
+import { useClass } from "@/features/classes/api/get-class";
+import { ArchiveClassSection } from "@/features/classes/components/archive-class-section";
+import { ClassDetailsSection } from "@/features/classes/components/class-details-section";
+import { RosterSection } from "@/features/classes/components/roster-section";
+import { useDocumentTitle } from "@/hooks/use-document-title";
+import { useUnsavedChanges } from "@/hooks/use-unsaved-changes";
+import { isApiError } from "@/lib/api-client";
+import { RequireRole } from "../layouts/require-role";
+
+export function Component() {
+  return (
+    <RequireRole roles={["teacher", "head_of_department"]} forWhom="teachers and heads of department">
+      <ClassPage />
+    </RequireRole>
+  );
+}
+
+function ClassPage() {
+  const { classId = "" } = useParams();
+  const query = useClass(classId);
+  useDocumentTitle(query.data?.name ?? "Class");
+
+  if (query.isPending) {
+    return (
+      <>
+        <BackLink access="owner" />
+        <SkeletonList rows={3} label="Loading the class…" className="mt-4" />
+      </>
+    );
+  }
+  if (query.isError) {
+    const notFound = isApiError(query.error) && query.error.status === 404;
+    return (
+      <div className="max-w-prose">
+        <BackLink access="owner" />
+        <PageHeader title={notFound ? "Class not found" : "Could not load this class"} className="mt-4" />
+        {notFound ? (
+          <p className="text-lg">This class does not exist, or it is not one of yours. Pick one from your classes.</p>
+        ) : (
+          <ErrorState title="Could not load this class" error={query.error} onRetry={() => void query.refetch()} retrying={query.isFetching} />
+        )}
+      </div>
+    );
+  }
+  // Keyed by id: moving to another class starts with fresh forms.
+  return <ClassView key={query.data.id} item={query.data} />;
+}
+
+function BackLink({ access }: { access: ClassSummary["access"] }) {
+  return access === "department" ? (
+    <ButtonLink to="/department" variant="quiet" icon={<ArrowLeftIcon />} className="-ml-3">
+      Department classes
+    </ButtonLink>
+  ) : (
+    <ButtonLink to="/classes" variant="quiet" icon={<ArrowLeftIcon />} className="-ml-3">
+      Your classes
+    </ButtonLink>
+  );
+}
+
+function ClassView({ item }: { item: ClassSummary }) {
+  const [detailsDirty, setDetailsDirty] = useState(false);
+  const [rosterDirty, setRosterDirty] = useState(false);
+  const blocker = useUnsavedChanges(detailsDirty || rosterDirty);
+  const readOnly = item.access === "department";
+
+  return (
+    <>
+      <BackLink access={item.access} />
+      <PageHeader
+        className="mt-2"
+        eyebrow="Class"
+        title={item.name}
+        description={
+          <span className="flex flex-wrap items-center gap-2">
+            <span>
+              {item.yearGroup} · {item.subject}
+            </span>
+            {item.archivedAt ? (
+              <Badge tone="warn" icon={<ArchiveIcon className="size-4" />}>
+                Archived
+              </Badge>
+            ) : null}
+            {readOnly ? (
+              <Badge icon={<LockIcon className="size-4" />}>Read-only</Badge>
+            ) : null}
+          </span>
+        }
+      />
+      {readOnly ? (
+        <Notice tone="info" className="mb-6">
+          <p>
+            You are looking at {item.teacher.displayName}’s class as head of department. Only {item.teacher.displayName} can
+            change it.
+          </p>
+        </Notice>
+      ) : null}
+      <div className="grid gap-6">
+        <ClassDetailsSection item={item} onDirtyChange={setDetailsDirty} />
+        <RosterSection item={item} onDirtyChange={setRosterDirty} />
+        {readOnly ? null : <ArchiveClassSection item={item} />}
+      </div>
+      <UnsavedChangesDialog blocker={blocker} />
+    </>
+  );
+}

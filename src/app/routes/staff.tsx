@@ -1,0 +1,68 @@
+import { EmptyState } from "@/components/ui/empty-state";
+import { ErrorState } from "@/components/ui/error-state";
+import { PeopleIcon } from "@/components/ui/icons";
+import { PageHeader } from "@/components/ui/page-header";
+import { Section } from "@/components/ui/section";
+import { SkeletonList } from "@/components/ui/skeleton";
+import { useStaff } from "@/features/staff/api/get-staff";
+import { StaffTable } from "@/features/staff/components/staff-table";
+import { useDocumentTitle } from "@/hooks/use-document-title";
+import { RequireRole } from "../layouts/require-role";
+import { useMe } from "../use-me";
+
+const ROLE_NOTES = [
+  { role: "Teacher", does: "Creates classes and keeps their rosters." },
+  { role: "Head of department", does: "Everything a teacher does, and looks at every class in their department without changing it." },
+  { role: "School admin", does: "Manages staff roles. Does not teach classes in Linkleap." },
+] as const;
+
+export function Component() {
+  useDocumentTitle("Staff");
+  return (
+    <RequireRole roles={["admin"]} forWhom="school admins">
+      <StaffPage />
+    </RequireRole>
+  );
+}
+
+function StaffPage() {
+  const me = useMe();
+  const staff = useStaff();
+  return (
+    <>
+      <PageHeader
+        eyebrow={me.school.name}
+        title="Staff"
+        description="Who can sign in to Linkleap, and what each person can do. Change a role, then save it on that row."
+      />
+      <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,1fr)]">
+        <Section title="Staff and roles" className="px-0 sm:px-0 [&>div:first-child]:px-4 sm:[&>div:first-child]:px-6">
+          <div className="px-3 md:px-2">
+            {staff.isPending ? (
+              <SkeletonList rows={4} label="Loading the staff list…" />
+            ) : staff.isError ? (
+              <ErrorState title="Could not load the staff list" error={staff.error} onRetry={() => void staff.refetch()} retrying={staff.isFetching} />
+            ) : staff.data.length === 0 ? (
+              <EmptyState icon={<PeopleIcon />} title="No staff yet" />
+            ) : (
+              <StaffTable staff={staff.data} viewerId={me.id} />
+            )}
+          </div>
+        </Section>
+        <Section title="What the roles mean">
+          <dl className="grid gap-4">
+            {ROLE_NOTES.map((note) => (
+              <div key={note.role}>
+                <dt className="font-bold">{note.role}</dt>
+                <dd className="text-ink-muted">{note.does}</dd>
+              </div>
+            ))}
+          </dl>
+          <p className="mt-4 border-t border-line pt-4 text-sm text-ink-muted">
+            Inviting new staff cannot be done from this page yet.
+          </p>
+        </Section>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,8 @@
+import type { ArchivedFilter } from "@contracts/classes";
+
+/** Query keys for the head of department's view. */
+export const departmentKeys = {
+  all: ["department"] as const,
+  classLists: () => [...departmentKeys.all, "classes"] as const,
+  classList: (filters: { archived: ArchivedFilter }) => [...departmentKeys.classLists(), filters] as const,
+};

@@ -1,0 +1,5 @@
+/** Query keys for staff management. */
+export const staffKeys = {
+  all: ["staff"] as const,
+  lists: () => [...staffKeys.all, "list"] as const,
+};
