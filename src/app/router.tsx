@@ -2,6 +2,7 @@ import { createBrowserRouter } from "react-router";
 import { RouteErrorBoundary } from "@/components/errors/route-error-boundary";
 import { LoadingState } from "@/components/ui/spinner";
 import { AppShell } from "./layouts/app-shell";
+import { lazyPage } from "./lazy-page";
 import { RootLayout } from "./layouts/root-layout";
 
 /**
@@ -16,18 +17,18 @@ export function createRouter() {
       // Shown while the first page's code arrives.
       HydrateFallback: () => <LoadingState label="Loading Linkleap…" className="justify-center py-24" />,
       children: [
-        { path: "sign-in", lazy: () => import("./routes/sign-in"), ErrorBoundary: RouteErrorBoundary },
-        { path: "sign-in/not-invited", lazy: () => import("./routes/not-invited"), ErrorBoundary: RouteErrorBoundary },
+        { path: "sign-in", lazy: lazyPage(() => import("./routes/sign-in")), ErrorBoundary: RouteErrorBoundary },
+        { path: "sign-in/not-invited", lazy: lazyPage(() => import("./routes/not-invited")), ErrorBoundary: RouteErrorBoundary },
         {
           Component: AppShell,
           ErrorBoundary: RouteErrorBoundary,
           children: [
-            { index: true, lazy: () => import("./routes/home"), ErrorBoundary: RouteErrorBoundary },
-            { path: "classes", lazy: () => import("./routes/classes"), ErrorBoundary: RouteErrorBoundary },
-            { path: "classes/:classId", lazy: () => import("./routes/class-detail"), ErrorBoundary: RouteErrorBoundary },
-            { path: "department", lazy: () => import("./routes/department"), ErrorBoundary: RouteErrorBoundary },
-            { path: "staff", lazy: () => import("./routes/staff"), ErrorBoundary: RouteErrorBoundary },
-            { path: "*", lazy: () => import("./routes/not-found"), ErrorBoundary: RouteErrorBoundary },
+            { index: true, lazy: lazyPage(() => import("./routes/home")), ErrorBoundary: RouteErrorBoundary },
+            { path: "classes", lazy: lazyPage(() => import("./routes/classes")), ErrorBoundary: RouteErrorBoundary },
+            { path: "classes/:classId", lazy: lazyPage(() => import("./routes/class-detail")), ErrorBoundary: RouteErrorBoundary },
+            { path: "department", lazy: lazyPage(() => import("./routes/department")), ErrorBoundary: RouteErrorBoundary },
+            { path: "staff", lazy: lazyPage(() => import("./routes/staff")), ErrorBoundary: RouteErrorBoundary },
+            { path: "*", lazy: lazyPage(() => import("./routes/not-found")), ErrorBoundary: RouteErrorBoundary },
           ],
         },
       ],

@@ -17,11 +17,11 @@ export function RootLayout() {
     <>
       <SkipLink />
       {socketStatus === "outdated" ? (
-        <div className="border-b border-warn bg-warn-soft px-4 py-2">
+        <div className="px-4 pt-3">
           <Notice
             tone="warn"
             live="alert"
-            className="mx-auto max-w-page border-0 bg-transparent px-0"
+            className="mx-auto max-w-page"
             title="This page is out of date"
             actions={
               <Button variant="primary" icon={<ReloadIcon />} onClick={() => window.location.reload()}>

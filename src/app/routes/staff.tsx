@@ -35,22 +35,20 @@ function StaffPage() {
         title="Staff"
         description="Who can sign in to Linkleap, and what each person can do. Change a role, then save it on that row."
       />
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,1fr)]">
-        <Section title="Staff and roles" className="px-0 sm:px-0 [&>div:first-child]:px-4 sm:[&>div:first-child]:px-6">
-          <div className="px-3 md:px-2">
-            {staff.isPending ? (
-              <SkeletonList rows={4} label="Loading the staff list…" />
-            ) : staff.isError ? (
-              <ErrorState title="Could not load the staff list" error={staff.error} onRetry={() => void staff.refetch()} retrying={staff.isFetching} />
-            ) : staff.data.length === 0 ? (
-              <EmptyState icon={<PeopleIcon />} title="No staff yet" />
-            ) : (
-              <StaffTable staff={staff.data} viewerId={me.id} />
-            )}
-          </div>
+      <div className="grid gap-6">
+        <Section title="Staff and roles">
+          {staff.isPending ? (
+            <SkeletonList rows={4} label="Loading the staff list…" />
+          ) : staff.isError ? (
+            <ErrorState title="Could not load the staff list" error={staff.error} onRetry={() => void staff.refetch()} retrying={staff.isFetching} />
+          ) : staff.data.length === 0 ? (
+            <EmptyState icon={<PeopleIcon />} title="No staff yet" />
+          ) : (
+            <StaffTable staff={staff.data} viewerId={me.id} />
+          )}
         </Section>
         <Section title="What the roles mean">
-          <dl className="grid gap-4">
+          <dl className="grid gap-4 md:grid-cols-3">
             {ROLE_NOTES.map((note) => (
               <div key={note.role}>
                 <dt className="font-bold">{note.role}</dt>
@@ -58,9 +56,7 @@ function StaffPage() {
               </div>
             ))}
           </dl>
-          <p className="mt-4 border-t border-line pt-4 text-sm text-ink-muted">
-            Inviting new staff cannot be done from this page yet.
-          </p>
+          <p className="mt-4 border-t border-line pt-4 text-sm text-ink-muted">Inviting new staff cannot be done from this page yet.</p>
         </Section>
       </div>
     </>

@@ -33,7 +33,6 @@ export function Notice({ tone, title, children, actions, live, className, id }: 
       id={id}
       role={live}
       className={cx("flex gap-3 rounded-control border-l-4 border-y border-r px-4 py-3", t.box, className)}
-      tabIndex={-1}
     >
       <Icon className={cx("mt-0.5 size-6", t.iconClass)} />
       <div className="min-w-0 flex-1">

@@ -124,7 +124,7 @@ export function ClassDetailsSection({ item, onDirtyChange }: {
         </form>
       ) : (
         <>
-          <dl className="grid gap-4 sm:grid-cols-3">
+          <dl className="grid grid-cols-2 gap-4 sm:grid-cols-3">
             <div>
               <dt className="text-sm font-bold text-ink-muted">Class name</dt>
               <dd className="text-lg break-words">{item.name}</dd>

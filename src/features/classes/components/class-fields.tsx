@@ -21,7 +21,7 @@ export function ClassFields({ values, errors, onChange }: {
     <div className="grid gap-5">
       <TextField
         label="Class name"
-        hint="As you and your pupils know it, for example “10A Physics”."
+        hint="The name you and your pupils use for the group."
         name="name"
         value={values.name}
         onChange={set("name")}

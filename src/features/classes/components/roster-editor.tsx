@@ -2,7 +2,7 @@ import { useEffect, useId, useMemo, useRef, useState, type FormEvent } from "rea
 import { ROSTER_LIMITS, type Roster } from "@contracts/roster";
 import { Button } from "@/components/ui/button";
 import { FieldError, CONTROL_CLASSES, TextAreaField } from "@/components/ui/field";
-import { ListIcon, PlusIcon, RemoveIcon } from "@/components/ui/icons";
+import { CheckCircleIcon, ListIcon, PlusIcon, RemoveIcon, WarnIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
 import { useFocusFirstError } from "@/hooks/use-focus-first-error";
 import { errorMessage, isApiError } from "@/lib/api-client";
@@ -41,7 +41,8 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
   const [pasteOpen, setPasteOpen] = useState(false);
   const formRef = useRef<HTMLFormElement>(null);
   const inputs = useRef(new Map<string, HTMLInputElement>());
-  const [focusKey, setFocusKey] = useState<string | null>(null);
+  /** A row to focus as soon as its input exists (just added). */
+  const focusOnMount = useRef<string | null>(null);
   const focusFirstError = useFocusFirstError(formRef);
   const save = useReplaceRoster();
   const baseId = useId();
@@ -63,13 +64,6 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
     setRows((current) => (rosterChanged(current.map((r) => r.value), before) ? current : rowsFromNames(savedNames)));
   }, [savedNames]);
 
-  // Move focus to a row after adding or removing one.
-  useEffect(() => {
-    if (!focusKey) return;
-    inputs.current.get(focusKey)?.focus();
-    setFocusKey(null);
-  }, [focusKey]);
-
   const errorFor = (row: RosterRow, index: number) =>
     serverRowErrors.get(row.key) ?? (submitted || touched.has(row.key) ? validation.rowErrors.get(index) : undefined);
 
@@ -86,7 +80,7 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
   const addRow = () => {
     const key = newRowKey();
     setRows((current) => [...current, { key, value: "" }]);
-    setFocusKey(key);
+    focusOnMount.current = key;
     setStatus(null);
   };
 
@@ -94,9 +88,10 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
     const next = rows.filter((_, i) => i !== index);
     setRows(next);
     setStatus(`Removed row ${index + 1}.`);
+    // Focus moves to the row that took its place (or the one before, or "Add name"), never to the page top.
     const neighbour = next[index] ?? next[index - 1];
-    if (neighbour) setFocusKey(neighbour.key);
-    else requestAnimationFrame(() => document.getElementById(`${baseId}-add`)?.focus());
+    const target = neighbour ? inputs.current.get(neighbour.key) : document.getElementById(`${baseId}-add`);
+    target?.focus();
   };
 
   const addPasted = (names: string[]) => {
@@ -106,7 +101,7 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
     setTouched((t) => new Set([...t, ...added.map((r) => r.key)]));
     setPasteOpen(false);
     setStatus(`Added ${plural(names.length, "name", "names")}. Check them, then save the roster.`);
-    if (added[0]) setFocusKey(added[0].key);
+    if (added[0]) focusOnMount.current = added[0].key;
   };
 
   const discard = () => {
@@ -207,8 +202,15 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
                   <input
                     id={inputId}
                     ref={(el) => {
-                      if (el) inputs.current.set(row.key, el);
-                      else inputs.current.delete(row.key);
+                      if (!el) {
+                        inputs.current.delete(row.key);
+                        return;
+                      }
+                      inputs.current.set(row.key, el);
+                      if (focusOnMount.current === row.key) {
+                        focusOnMount.current = null;
+                        el.focus();
+                      }
                     }}
                     value={row.value}
                     onChange={(event) => updateRow(row.key, event.target.value)}
@@ -264,8 +266,9 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
 
       <div
         className={cx(
-          "sticky bottom-0 -mx-4 mt-6 flex flex-wrap items-center gap-3 border-t border-line bg-surface px-4 py-3 sm:-mx-6 sm:px-6",
-          dirty && "shadow-[0_-6px_16px_rgb(20_24_33/0.08)]",
+          "-mx-4 mt-6 flex flex-wrap items-center gap-3 border-t border-line bg-surface px-4 py-3 sm:-mx-6 sm:px-6",
+          // While there is something to save, the save button stays in view however long the roster is.
+          dirty && "sticky bottom-0 shadow-[0_-6px_16px_rgb(20_24_33/0.08)]",
         )}
       >
         <Button type="submit" variant="primary" busy={save.isPending}>
@@ -276,17 +279,23 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
             Discard changes
           </Button>
         ) : null}
+        {status ? (
+          <p className="flex items-center gap-1.5 font-bold text-ok" aria-hidden="true">
+            <CheckCircleIcon className="size-5" />
+            {status}
+          </p>
+        ) : null}
         <p className="ml-auto text-sm text-ink-muted">
           <span className="font-mono font-bold text-ink">{nameCount}</span> of at most{" "}
           <span className="font-mono">{ROSTER_LIMITS.entries}</span> names
-          {dirty ? <span className="font-bold text-warn"> · Not saved yet</span> : null}
+          {dirty ? (
+            <span className="inline-flex items-center gap-1 font-bold text-warn">
+              {" "}
+              · <WarnIcon className="size-4" /> Not saved yet
+            </span>
+          ) : null}
         </p>
       </div>
-      {status ? (
-        <p className="mt-3 text-ok font-bold" aria-hidden="true">
-          {status}
-        </p>
-      ) : null}
     </form>
   );
 }

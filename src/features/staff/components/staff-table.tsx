@@ -23,10 +23,10 @@ export function StaffTable({ staff, viewerId }: { staff: readonly StaffMember[];
       <caption className="sr-only">Staff and their roles</caption>
       <thead className="sr-only md:not-sr-only md:table-header-group">
         <tr className="text-sm text-ink-muted">
-          <th scope="col" className="px-4 py-2 font-bold">Name</th>
-          <th scope="col" className="px-4 py-2 font-bold">Department</th>
-          <th scope="col" className="px-4 py-2 font-bold">Last signed in</th>
-          <th scope="col" className="px-4 py-2 font-bold">Role</th>
+          <th scope="col" className="py-2 pr-3 font-bold">Name</th>
+          <th scope="col" className="px-3 py-2 font-bold">Department</th>
+          <th scope="col" className="px-3 py-2 font-bold">Last signed in</th>
+          <th scope="col" className="py-2 pl-3 font-bold">Role</th>
         </tr>
       </thead>
       <tbody className="grid gap-3 md:table-row-group">
@@ -38,7 +38,7 @@ export function StaffTable({ staff, viewerId }: { staff: readonly StaffMember[];
   );
 }
 
-const CELL = "block px-4 py-1.5 md:table-cell md:py-3 md:align-top";
+const CELL = "block px-4 py-1.5 md:table-cell md:px-3 md:py-3 md:align-top md:first:pl-0 md:last:pr-0";
 const CELL_LABEL = "block text-sm font-bold text-ink-muted md:hidden";
 
 function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean }) {
@@ -58,7 +58,7 @@ function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean
       {
         onSuccess: (saved) => {
           setRole(saved.role);
-          setMessage({ tone: "ok", text: `Saved: ${saved.displayName} is now ${ROLE_LABELS[saved.role].toLocaleLowerCase("en-GB")}.` });
+          setMessage({ tone: "ok", text: `Saved: ${saved.displayName}’s role is now ${ROLE_LABELS[saved.role]}.` });
         },
         onError: (error) => {
           const text = (isApiError(error) && error.fieldMessage("role")) || errorMessage(error);
@@ -75,7 +75,7 @@ function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean
           {member.displayName}
           {isViewer ? <span className="font-normal text-ink-muted"> (you)</span> : null}
         </span>
-        <span className="block break-all text-sm text-ink-muted">{member.email}</span>
+        <span className="block text-sm text-ink-muted [overflow-wrap:anywhere]">{member.email}</span>
       </td>
       <td className={CELL}>
         <span className={CELL_LABEL}>Department</span>
@@ -83,7 +83,7 @@ function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean
       </td>
       <td className={CELL}>
         <span className={CELL_LABEL}>Last signed in</span>
-        {formatSignIn(member.lastSignInAt)}
+        <span className="md:whitespace-nowrap">{formatSignIn(member.lastSignInAt)}</span>
       </td>
       <td className={cx(CELL, "md:min-w-[22rem]")}>
         <form onSubmit={save} noValidate className="grid gap-2">
