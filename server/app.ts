@@ -128,7 +128,8 @@ export function createApp({ config, database, log = defaultLog }: AppDeps): Link
     app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
     // Every other page is the client's: React Router takes it from there.
     app.get("/{*splat}", (_req, res) => {
-      res.set("Cache-Control", "no-cache").sendFile(join(clientDir, "index.html"));
+      // `root` keeps send's dot-file check to the file's own name (the folder may be under .data/).
+      res.set("Cache-Control", "no-cache").sendFile("index.html", { root: clientDir });
     });
   }
 

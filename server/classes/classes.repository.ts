@@ -23,8 +23,7 @@ function querySummaries(db: Reader, where: SQL | undefined) {
     .select(summaryColumns)
     .from(classes)
     .innerJoin(staff, eq(staff.id, classes.teacherId))
-    .where(where)
-    .orderBy(sql`${classes.archivedAt} is not null`, asc(sql`lower(${classes.name})`));
+    .where(where);
 }
 type SummaryRow = Awaited<ReturnType<typeof querySummaries>>[number];
 
@@ -49,9 +48,14 @@ function archivedFilter(archived: ArchivedFilter): SQL | undefined {
   return undefined;
 }
 
+/** "9Q" before "10A": names compare with their numbers as numbers. */
+const byName = new Intl.Collator("en", { numeric: true, sensitivity: "base" });
+
 async function selectSummaries(db: Reader, where: SQL | undefined, viewerId: string) {
   const rows = await querySummaries(db, where);
-  return rows.map((row) => toSummary(row, viewerId));
+  return rows
+    .map((row) => toSummary(row, viewerId))
+    .sort((a, b) => Number(Boolean(a.archivedAt)) - Number(Boolean(b.archivedAt)) || byName.compare(a.name, b.name));
 }
 
 export function listOwnClasses(

@@ -253,6 +253,7 @@ function pickerPage(params: Record<string, string>, accounts: ProviderAccount[],
 function page(title: string, body: string) {
   return `<!doctype html><html lang="en"><head><meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
+<link rel="icon" href="data:,">
 <title>${escapeHtml(title)}</title>
 <style>
   body { font: 18px/1.5 system-ui, sans-serif; margin: 0; background: #eef1f4; color: #16202c; }

@@ -5,9 +5,8 @@
  */
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEMO_STAFF } from "../../server/db/seed/demo-data";
+import { DEMO_STAFF, DEMO_UNINVITED } from "../../server/db/seed/demo-data";
 import { seedDemo } from "../../server/db/seed/seed-demo";
-import { DEMO_UNINVITED } from "../../server/db/seed/demo-data";
 import { keepScreenshot, launchBrowser } from "../support/browser";
 import { buildClientForTests } from "../support/client-build";
 import { createTestDatabase, type TestDatabase } from "../support/test-database";
@@ -40,7 +39,8 @@ describe("a teacher's classes in the browser", () => {
     const page = await context.newPage();
     const problems: string[] = [];
     page.on("pageerror", (e) => problems.push(e.message));
-    page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
+    page.on("response", (r) => r.status() >= 400 && problems.push(`${r.status()} ${new URL(r.url()).pathname}`));
+    page.on("console", (m) => m.type() === "error" && m.location().url.startsWith(stack.url) && problems.push(m.text()));
 
     // Signed out, any page leads to sign-in.
     await page.goto(`${stack.url}/classes`);
@@ -52,7 +52,7 @@ describe("a teacher's classes in the browser", () => {
     await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
     // Back where the teacher was going.
     await page.waitForURL(`${stack.url}/classes`);
-    await expect(page.getByRole("heading", { name: "Your classes" }).isVisible()).resolves.toBe(true);
+    await page.getByRole("heading", { name: "Your classes" }).waitFor();
 
     // The demo classes are there.
     await page.getByText("10A Physics").first().waitFor();
