@@ -161,3 +161,17 @@ describe("a good roster edit", () => {
     expect(body.names.map((n) => n.displayName)).not.toContain("Jude K.");
   });
 });
+
+describe("the class list", () => {
+  it("orders names with their numbers as numbers, current classes first", async () => {
+    for (const name of ["10B Physics", "9B Physics"]) {
+      expect((await teacher.json("/api/classes", { method: "POST", json: { name, yearGroup: "Year 9", subject: "Physics" } })).status).toBe(201);
+    }
+    const { body } = await teacher.json<ClassSummary[]>("/api/classes?archived=include");
+    const names = body.map((c) => c.name);
+    expect(names.indexOf("9B Physics")).toBeLessThan(names.indexOf("10B Physics"));
+    const firstArchived = body.findIndex((c) => c.archivedAt);
+    expect(firstArchived).toBeGreaterThan(0);
+    expect(body.slice(firstArchived).every((c) => c.archivedAt)).toBe(true);
+  });
+});
