@@ -23,8 +23,9 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
 
 /**
  * Edits a class roster as a list of display names. The whole list is saved at once, in order.
- * Names are checked as they are typed (after leaving a row, or after a save attempt) with the
- * same rules as the server; server errors land on the row they belong to.
+ * Names are checked with the same rules as the server: pasted names at once, typed names from
+ * the first save attempt on (checking on leaving a row would move the buttons under the pointer
+ * mid-click). Server errors land on the row they belong to.
  */
 export function RosterEditor({ classId, roster, onDirtyChange }: {
   classId: string;
@@ -33,6 +34,7 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
 }) {
   const savedNames = useMemo(() => roster.names.map((n) => n.displayName), [roster]);
   const [rows, setRows] = useState<RosterRow[]>(() => rowsFromNames(savedNames));
+  /** Rows checked before any save attempt: the ones just pasted. */
   const [touched, setTouched] = useState<ReadonlySet<string>>(new Set());
   const [submitted, setSubmitted] = useState(false);
   const [serverRowErrors, setServerRowErrors] = useState<ReadonlyMap<string, string>>(new Map());
@@ -214,7 +216,6 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
                     }}
                     value={row.value}
                     onChange={(event) => updateRow(row.key, event.target.value)}
-                    onBlur={() => setTouched((t) => (t.has(row.key) ? t : new Set([...t, row.key])))}
                     aria-invalid={error ? true : undefined}
                     aria-describedby={error ? errorId : undefined}
                     autoComplete="off"
@@ -228,7 +229,7 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
                 <Button
                   variant="quiet"
                   className="min-w-touch px-2.5"
-                  aria-label={`Remove ${shown || `row ${index + 1}`}`}
+                  aria-label={shown ? `Remove ${shown} (row ${index + 1})` : `Remove row ${index + 1}`}
                   icon={<RemoveIcon />}
                   onClick={() => removeRow(index)}
                 >
@@ -289,9 +290,8 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
           <span className="font-mono font-bold text-ink">{nameCount}</span> of at most{" "}
           <span className="font-mono">{ROSTER_LIMITS.entries}</span> names
           {dirty ? (
-            <span className="inline-flex items-center gap-1 font-bold text-warn">
-              {" "}
-              · <WarnIcon className="size-4" /> Not saved yet
+            <span className="ml-2 inline-flex items-center gap-1 font-bold text-warn">
+              <WarnIcon className="size-4" /> Not saved yet
             </span>
           ) : null}
         </p>
