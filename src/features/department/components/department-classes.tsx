@@ -36,7 +36,7 @@ export function DepartmentClasses({ archived, viewerId }: { archived: ArchivedFi
   }
 
   return (
-    <div className="grid gap-6">
+    <div className="grid min-w-0 gap-6">
       <p className="text-ink-muted">
         <span className="font-mono font-bold text-ink">{query.data.length}</span> {query.data.length === 1 ? "class" : "classes"},{" "}
         <span className="font-mono font-bold text-ink">{groups.length}</span> {groups.length === 1 ? "teacher" : "teachers"}
@@ -45,7 +45,7 @@ export function DepartmentClasses({ archived, viewerId }: { archived: ArchivedFi
         const headingId = `teacher-${group.teacher.id}`;
         const own = group.teacher.id === viewerId;
         return (
-          <section key={group.teacher.id} aria-labelledby={headingId} className="rounded-card border border-line bg-surface shadow-card">
+          <section key={group.teacher.id} aria-labelledby={headingId} className="min-w-0 rounded-card border border-line bg-surface shadow-card">
             <h2 id={headingId} className="flex flex-wrap items-baseline gap-x-3 border-b border-line px-4 py-3 text-xl font-bold sm:px-6">
               {group.teacher.displayName}
               {own ? <span className="text-base font-normal text-ink-muted">(you)</span> : null}
