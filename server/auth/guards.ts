@@ -1,5 +1,5 @@
 import type { NextFunction, Request, RequestHandler, Response } from "express";
-import type { StaffRole } from "../contracts/staff";
+import type { StaffRole } from "../contracts/staff-roles";
 import { forbidden, unauthenticated } from "../http/app-error";
 import type { Actor } from "../staff/staff.repository";
 

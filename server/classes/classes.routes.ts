@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { classListQuerySchema, createClassInputSchema, updateClassInputSchema } from "../contracts/classes";
 import { rosterInputSchema } from "../contracts/roster";
-import { TEACHING_ROLES } from "../contracts/staff";
+import { TEACHING_ROLES } from "../contracts/staff-roles";
 import type { Db } from "../db/client";
 import { actorOf, requireRole } from "../auth/guards";
 import { parseId, parseInput } from "../http/validate";

@@ -1,18 +1,7 @@
 import { z } from "zod";
+import { STAFF_ROLES } from "./staff-roles";
 
-/** A head of department is a teacher who also sees the department; an admin manages staff. */
-export const STAFF_ROLES = ["teacher", "head_of_department", "admin"] as const;
 export const staffRoleSchema = z.enum(STAFF_ROLES);
-export type StaffRole = z.infer<typeof staffRoleSchema>;
-
-export const STAFF_ROLE_LABELS: Record<StaffRole, string> = {
-  teacher: "Teacher",
-  head_of_department: "Head of department",
-  admin: "School admin",
-};
-
-/** Roles that own and teach classes. */
-export const TEACHING_ROLES: readonly StaffRole[] = ["teacher", "head_of_department"];
 
 export const meSchema = z.object({
   id: z.uuid(),

@@ -12,7 +12,7 @@ import { migrateDatabase } from "../db/migrate";
 import { DEMO_STAFF, DEMO_UNINVITED } from "../db/seed/demo-data";
 import { seedDemo } from "../db/seed/seed-demo";
 import { projectPath } from "../paths";
-import { STAFF_ROLE_LABELS } from "../contracts/staff";
+import { STAFF_ROLE_LABELS } from "../contracts/staff-roles";
 import { createMailCatcher, type MailCatcher } from "./mail-catcher";
 import { ensureDatabase, startCluster, stopCluster, type ClusterHandle } from "./postgres";
 import { createSignInProvider, signInProviderEndpoints, type SignInProvider } from "./sign-in-provider";

@@ -1,5 +1,6 @@
 import { and, asc, eq, isNull, sql } from "drizzle-orm";
-import type { StaffMember, StaffRole } from "../contracts/staff";
+import type { StaffMember } from "../contracts/staff";
+import type { StaffRole } from "../contracts/staff-roles";
 import type { Db } from "../db/client";
 import { departments, schools, staff } from "../db/schema";
 

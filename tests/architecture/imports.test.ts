@@ -4,7 +4,8 @@
  * - server/ never imports the client;
  * - server/contracts/ imports only zod, sim/ and other contracts, so the client can use it;
  * - the client reaches the server only through server/contracts/;
- * - inside src/, no feature imports another feature.
+ * - inside src/, no feature imports another feature, and shared code (components, hooks, lib)
+ *   imports no feature: only src/app composes features.
  */
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import { dirname, join, relative, resolve } from "node:path";
@@ -86,5 +87,11 @@ describe("import boundaries", () => {
       return Boolean(other && other !== featureOf(file));
     });
     expect(bad).toEqual([]);
+  });
+
+  it("shared client code imports no feature", () => {
+    const shared = ["src/components", "src/hooks", "src/lib"].flatMap(filesUnder);
+    expect(shared.length).toBeGreaterThan(0);
+    expect(violations(shared, ({ target }) => Boolean(target?.startsWith("src/features/")))).toEqual([]);
   });
 });

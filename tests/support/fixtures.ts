@@ -4,7 +4,7 @@
  */
 import type { Db } from "../../server/db/client";
 import { classes, departments, rosterEntries, schools, staff } from "../../server/db/schema";
-import type { StaffRole } from "../../server/contracts/staff";
+import type { StaffRole } from "../../server/contracts/staff-roles";
 
 export const PEOPLE = {
   teacherA: { email: "ada.quill@northfen.example", name: "Ada Quill", role: "teacher" },

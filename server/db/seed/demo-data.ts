@@ -2,7 +2,7 @@
  * The demo school. Every school, person and class here is invented; the `.example`
  * domain is reserved for examples (RFC 2606), so no address can reach anyone.
  */
-import type { StaffRole } from "../../contracts/staff";
+import type { StaffRole } from "../../contracts/staff-roles";
 
 export const DEMO_SCHOOL = { name: "Brackenfold Academy", department: "Science" } as const;
 

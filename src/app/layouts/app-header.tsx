@@ -1,5 +1,6 @@
 import { Link, NavLink } from "react-router";
-import type { Me, StaffRole } from "@contracts/staff";
+import type { Me } from "@contracts/staff";
+import type { StaffRole } from "@contracts/staff-roles";
 import { Wordmark } from "@/components/layout/logo-mark";
 import { AccountMenu } from "@/features/auth/components/account-menu";
 import { cx } from "@/lib/cx";

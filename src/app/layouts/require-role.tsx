@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import type { StaffRole } from "@contracts/staff";
+import type { StaffRole } from "@contracts/staff-roles";
 import { ButtonLink } from "@/components/ui/button";
 import { LockIcon } from "@/components/ui/icons";
 import { PageHeader } from "@/components/ui/page-header";

@@ -5,7 +5,7 @@ import { Notice } from "@/components/ui/notice";
 import { Spinner } from "@/components/ui/spinner";
 import { errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
-import { ROLE_LABELS } from "@/lib/staff-roles";
+import { STAFF_ROLE_LABELS } from "@contracts/staff-roles";
 import { useSignOut } from "../api/sign-out";
 import { useSignOutEverywhere } from "../api/sign-out-everywhere";
 
@@ -79,10 +79,10 @@ export function AccountMenu({ me }: { me: Me }) {
         </span>
         <span className="hidden min-w-0 leading-tight sm:block">
           <span className="block max-w-48 truncate font-bold">{me.displayName}</span>
-          <span className="block text-sm text-ink-muted">{ROLE_LABELS[me.role]}</span>
+          <span className="block text-sm text-ink-muted">{STAFF_ROLE_LABELS[me.role]}</span>
         </span>
         <span className="sr-only sm:hidden">
-          {me.displayName}, {ROLE_LABELS[me.role]}
+          {me.displayName}, {STAFF_ROLE_LABELS[me.role]}
         </span>
         <span className="sr-only">: account menu</span>
         <ChevronDownIcon className={cx("size-5 transition-transform", open && "rotate-180")} />
@@ -96,7 +96,7 @@ export function AccountMenu({ me }: { me: Me }) {
         <div className="border-b border-line px-3 pb-3 pt-2">
           <p className="font-bold">{me.displayName}</p>
           <p className="text-sm text-ink-muted">
-            {ROLE_LABELS[me.role]}
+            {STAFF_ROLE_LABELS[me.role]}
             {me.department ? ` · ${me.department.name}` : ""}
           </p>
           <p className="break-all text-sm text-ink-muted">{me.email}</p>

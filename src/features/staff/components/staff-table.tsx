@@ -1,11 +1,12 @@
 import { useId, useState, type FormEvent } from "react";
-import type { StaffMember, StaffRole } from "@contracts/staff";
+import type { StaffMember } from "@contracts/staff";
+import type { StaffRole } from "@contracts/staff-roles";
 import { Button } from "@/components/ui/button";
 import { CONTROL_CLASSES, FieldError } from "@/components/ui/field";
 import { CheckCircleIcon, WarnIcon } from "@/components/ui/icons";
 import { isApiError, errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
-import { ROLE_LABELS } from "@/lib/staff-roles";
+import { STAFF_ROLE_LABELS } from "@contracts/staff-roles";
 import { useUpdateStaffRole } from "../api/update-staff-role";
 
 const ROLE_ORDER: readonly StaffRole[] = ["teacher", "head_of_department", "admin"];
@@ -58,7 +59,7 @@ function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean
       {
         onSuccess: (saved) => {
           setRole(saved.role);
-          setMessage({ tone: "ok", text: `Saved: ${saved.displayName}’s role is now ${ROLE_LABELS[saved.role]}.` });
+          setMessage({ tone: "ok", text: `Saved: ${saved.displayName}’s role is now ${STAFF_ROLE_LABELS[saved.role]}.` });
         },
         onError: (error) => {
           const text = (isApiError(error) && error.fieldMessage("role")) || errorMessage(error);
@@ -108,7 +109,7 @@ function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean
             >
               {ROLE_ORDER.map((value) => (
                 <option key={value} value={value}>
-                  {ROLE_LABELS[value]}
+                  {STAFF_ROLE_LABELS[value]}
                 </option>
               ))}
             </select>
