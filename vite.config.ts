@@ -19,10 +19,11 @@ export default defineConfig({
     host: "127.0.0.1",
     port: Number(process.env.VITE_PORT ?? 5173),
     strictPort: true,
+    // Keep the browser's Host header: sign-in must start and end on the address people use.
     proxy: {
-      "/api": apiTarget,
-      "/auth": apiTarget,
-      "/socket.io": { target: apiTarget, ws: true },
+      "/api": { target: apiTarget, changeOrigin: false },
+      "/auth": { target: apiTarget, changeOrigin: false },
+      "/socket.io": { target: apiTarget, changeOrigin: false, ws: true },
     },
   },
   test: {

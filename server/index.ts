@@ -9,12 +9,15 @@ import { parseEnv } from "./config/env";
 import { connectDatabase } from "./db/client";
 import { migrateDatabase } from "./db/migrate";
 import { describeStack, startStack } from "./devstack/stack";
+import { StopList, stopOnSignals } from "./lifecycle";
 import { projectPath } from "./paths";
 
 async function main() {
   const env = parseEnv();
   const clientDir = projectPath("dist", "client");
-  let stop: () => Promise<void>;
+  // Registered first, so Ctrl-C during start-up (say, mid-build) still stops what is up.
+  const stops = new StopList();
+  stopOnSignals(() => stops.run());
 
   if (env.LINKLEAP_MODE === "demo") {
     const dataDir = resolve(env.LINKLEAP_DATA_DIR);
@@ -30,14 +33,14 @@ async function main() {
       clientDir,
       sessionSecret: env.SESSION_SECRET,
       stopPostgresOnExit: true,
-    });
+    }, stops);
     console.log(describeStack(stack, dataDir));
-    stop = stack.stop;
   } else {
     if (!existsSync(join(clientDir, "index.html"))) {
       throw new Error("No built client in dist/client: run `npm run build` before starting in production mode.");
     }
     const database = connectDatabase(env.DATABASE_URL!);
+    stops.push(() => database.close());
     await migrateDatabase(database.pool);
     const server = createApp({
       database,
@@ -57,27 +60,9 @@ async function main() {
       },
     });
     await server.listen(env.PORT, env.HOST);
+    stops.push(() => server.close());
     console.log(`Linkleap is listening on ${env.HOST}:${env.PORT} (public address ${env.PUBLIC_URL})`);
-    stop = async () => {
-      await server.close();
-      await database.close();
-    };
   }
-
-  let stopping = false;
-  const shutdown = (signal: string) => {
-    if (stopping) return;
-    stopping = true;
-    console.log(`\n${signal}: stopping Linkleap…`);
-    stop()
-      .then(() => process.exit(0))
-      .catch((error) => {
-        console.error(error);
-        process.exit(1);
-      });
-  };
-  process.on("SIGINT", () => shutdown("SIGINT"));
-  process.on("SIGTERM", () => shutdown("SIGTERM"));
 }
 
 main().catch((error) => {

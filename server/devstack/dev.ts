@@ -6,6 +6,7 @@
 import { resolve } from "node:path";
 import { createServer } from "vite";
 import { parseEnv } from "../config/env";
+import { StopList, stopOnSignals } from "../lifecycle";
 import { projectPath } from "../paths";
 import { describeStack, startStack } from "./stack";
 
@@ -13,6 +14,10 @@ const env = parseEnv();
 const vitePort = Number(process.env.VITE_PORT ?? 5173);
 const devOrigin = `http://127.0.0.1:${vitePort}`;
 const dataDir = resolve(env.LINKLEAP_DATA_DIR);
+
+// Registered first, so Ctrl-C during start-up still stops what is up.
+const stops = new StopList();
+stopOnSignals(() => stops.run());
 
 const stack = await startStack({
   dataDir,
@@ -28,19 +33,9 @@ const stack = await startStack({
   extraOrigins: [devOrigin],
   sessionSecret: env.SESSION_SECRET,
   stopPostgresOnExit: true,
-});
+}, stops);
 const vite = await createServer({ configFile: projectPath("vite.config.ts") });
+stops.push(() => vite.close());
 await vite.listen();
 console.log(describeStack(stack, dataDir).replace(stack.url, `${devOrigin} (Vite dev server; API on port ${env.PORT})`));
 
-let stopping = false;
-for (const signal of ["SIGINT", "SIGTERM"] as const) {
-  process.on(signal, () => {
-    if (stopping) return;
-    stopping = true;
-    void vite
-      .close()
-      .then(stack.stop)
-      .then(() => process.exit(0));
-  });
-}

@@ -11,6 +11,7 @@ import { connectDatabase, type Database } from "../db/client";
 import { migrateDatabase } from "../db/migrate";
 import { DEMO_STAFF, DEMO_UNINVITED } from "../db/seed/demo-data";
 import { seedDemo } from "../db/seed/seed-demo";
+import { StopList } from "../lifecycle";
 import { projectPath } from "../paths";
 import { STAFF_ROLE_LABELS } from "../contracts/staff-roles";
 import { createMailCatcher, type MailCatcher } from "./mail-catcher";
@@ -55,15 +56,15 @@ function persistentSecret(file: string): string {
   return secret;
 }
 
-export async function startStack(options: StackOptions): Promise<RunningStack> {
+/**
+ * Starts the stack. `stops` collects how to stop each part as it comes up, so a caller that
+ * registered it for Ctrl-C before calling can stop a half-started stack too.
+ */
+export async function startStack(options: StackOptions, stops = new StopList()): Promise<RunningStack> {
   const log = options.log ?? console.log;
   const dataDir = resolve(options.dataDir);
   mkdirSync(dataDir, { recursive: true });
-  const stops: (() => Promise<unknown>)[] = [];
-  const stop = async () => {
-    for (const s of stops.reverse()) await s().catch((e) => log(`while stopping: ${String(e)}`));
-    stops.length = 0;
-  };
+  const stop = () => stops.run();
 
   if (options.port === 0) throw new Error("The stack needs a fixed port: the sign-in callback URL must be known in advance.");
   try {
