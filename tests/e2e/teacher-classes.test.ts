@@ -9,28 +9,22 @@ import { DEMO_STAFF, DEMO_UNINVITED } from "../../server/db/seed/demo-data";
 import { seedDemo } from "../../server/db/seed/seed-demo";
 import { keepScreenshot, launchBrowser } from "../support/browser";
 import { buildClientForTests } from "../support/client-build";
-import { createTestDatabase, type TestDatabase } from "../support/test-database";
-import { startTestStack, type TestStack } from "../support/test-stack";
+import { useTestStack } from "../support/test-stack";
 
 const teacher = DEMO_STAFF.find((s) => s.key === "teacherA")!;
-let database: TestDatabase;
-let stack: TestStack;
+let clientDir: string;
 let browser: Browser;
 
 beforeAll(async () => {
-  const clientDir = await buildClientForTests();
-  database = await createTestDatabase();
-  await seedDemo(database.db);
-  stack = await startTestStack(database, {
-    clientDir,
-    accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
-  });
+  clientDir = await buildClientForTests();
   browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
-  await stack?.close();
-  await database?.drop();
+});
+const ctx = useTestStack(seedDemo, {
+  clientDir: () => clientDir,
+  accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
 });
 
 describe("a teacher's classes in the browser", () => {
@@ -40,18 +34,18 @@ describe("a teacher's classes in the browser", () => {
     const problems: string[] = [];
     page.on("pageerror", (e) => problems.push(e.message));
     page.on("response", (r) => r.status() >= 400 && problems.push(`${r.status()} ${new URL(r.url()).pathname}`));
-    page.on("console", (m) => m.type() === "error" && m.location().url.startsWith(stack.url) && problems.push(m.text()));
+    page.on("console", (m) => m.type() === "error" && m.location().url.startsWith(ctx.stack.url) && problems.push(m.text()));
 
     // Signed out, any page leads to sign-in.
-    await page.goto(`${stack.url}/classes`);
+    await page.goto(`${ctx.stack.url}/classes`);
     await page.waitForURL(/\/sign-in/);
     await keepScreenshot(page, "e2e", "01-sign-in");
 
     await page.getByRole("link", { name: "Sign in with your school account" }).or(page.getByRole("button", { name: "Sign in with your school account" })).click();
-    await page.waitForURL(`${stack.providerUrl}/**`);
+    await page.waitForURL(`${ctx.stack.providerUrl}/**`);
     await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
     // Back where the teacher was going.
-    await page.waitForURL(`${stack.url}/classes`);
+    await page.waitForURL(`${ctx.stack.url}/classes`);
     await page.getByRole("heading", { name: "Your classes" }).waitFor();
 
     // The demo classes are there.
@@ -81,11 +75,11 @@ describe("a teacher's classes in the browser", () => {
   it("works on a narrow phone screen: the class list fits without sideways scrolling", async () => {
     const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
-    await page.goto(`${stack.url}/sign-in`);
+    await page.goto(`${ctx.stack.url}/sign-in`);
     await page.getByRole("link", { name: "Sign in with your school account" }).or(page.getByRole("button", { name: "Sign in with your school account" })).click();
     await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
-    await page.waitForURL(`${stack.url}/`);
-    await page.goto(`${stack.url}/classes`);
+    await page.waitForURL(`${ctx.stack.url}/`);
+    await page.goto(`${ctx.stack.url}/classes`);
     await page.getByText("10A Physics").first().waitFor();
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);

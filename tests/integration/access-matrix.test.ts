@@ -3,12 +3,11 @@
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import type { ApiErrorBody } from "../../server/contracts/errors";
 import { PEOPLE, seedFixture, type Fixture, type PersonKey } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
-import { createTestDatabase, type TestDatabase } from "../support/test-database";
-import { startTestStack, type TestStack } from "../support/test-stack";
+import { useTestStack } from "../support/test-stack";
 
 type Caller = "anonymous" | PersonKey;
 const CALLERS: Caller[] = ["anonymous", "teacherA", "teacherB", "head", "otherHead", "elsewhere", "admin"];
@@ -89,37 +88,28 @@ const ROUTES: RouteCase[] = [
   },
 ];
 
-let database: TestDatabase;
-let stack: TestStack;
-let fixture: Fixture;
+const ctx = useTestStack(seedFixture);
 const agents = new Map<Caller, HttpAgent>();
 
 beforeAll(async () => {
-  database = await createTestDatabase();
-  fixture = await seedFixture(database.db);
-  stack = await startTestStack(database);
   for (const caller of CALLERS) {
-    const agent = new HttpAgent(stack.url);
+    const agent = new HttpAgent(ctx.stack.url);
     if (caller !== "anonymous") await signIn(agent, PEOPLE[caller].email);
     agents.set(caller, agent);
   }
-});
-afterAll(async () => {
-  await stack?.close();
-  await database?.drop();
 });
 
 describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
   it.each(CALLERS)("as %s", async (caller) => {
     const agent = agents.get(caller)!;
-    const { status, body: reply } = await agent.json<unknown>(path(fixture), { method, json: body?.(caller) });
+    const { status, body: reply } = await agent.json<unknown>(path(ctx.fixture), { method, json: body?.(caller) });
     expect(status).toBe(expected[caller]);
     if (status >= 400) {
       // Refusals carry an error code and nothing about the resource.
       const error = reply as ApiErrorBody;
       expect(Object.keys(error)).toEqual(["error"]);
       expect(error.error.code).toBe({ 401: "unauthenticated", 403: "forbidden", 404: "not_found" }[status]);
-      expect(JSON.stringify(reply)).not.toContain(fixture.classA);
+      expect(JSON.stringify(reply)).not.toContain(ctx.fixture.classA);
       expect(JSON.stringify(reply)).not.toContain("Physics");
     }
   });
@@ -128,7 +118,7 @@ describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
 describe("what each caller sees", () => {
   it("someone else's class and a class that does not exist look exactly the same", async () => {
     const agent = agents.get("teacherB")!;
-    const theirs = await agent.json(`/api/classes/${fixture.classA}`);
+    const theirs = await agent.json(`/api/classes/${ctx.fixture.classA}`);
     const missing = await agent.json("/api/classes/00000000-0000-4000-8000-000000000000");
     const notAnId = await agent.json("/api/classes/not-an-id");
     expect(theirs).toEqual(missing);
@@ -138,17 +128,17 @@ describe("what each caller sees", () => {
   it("a teacher's list holds only their own classes", async () => {
     const { body } = await agents.get("teacherB")!.json<{ id: string; teacher: { id: string } }[]>("/api/classes");
     expect(body.length).toBeGreaterThan(0);
-    expect(body.every((c) => c.teacher.id === fixture.staffIds.teacherB)).toBe(true);
-    expect(body.map((c) => c.id)).not.toContain(fixture.classA);
+    expect(body.every((c) => c.teacher.id === ctx.fixture.staffIds.teacherB)).toBe(true);
+    expect(body.map((c) => c.id)).not.toContain(ctx.fixture.classA);
   });
 
   it("the head of department sees the department's classes read-only, and no other department's or school's", async () => {
     const { body } = await agents.get("head")!.json<{ id: string; access: string }[]>("/api/department/classes");
     const ids = body.map((c) => c.id);
-    expect(ids).toEqual(expect.arrayContaining([fixture.classA, fixture.classB]));
-    expect(ids).not.toContain(fixture.classElsewhere);
-    expect(body.find((c) => c.id === fixture.classA)!.access).toBe("department");
+    expect(ids).toEqual(expect.arrayContaining([ctx.fixture.classA, ctx.fixture.classB]));
+    expect(ids).not.toContain(ctx.fixture.classElsewhere);
+    expect(body.find((c) => c.id === ctx.fixture.classA)!.access).toBe("department");
     const other = await agents.get("otherHead")!.json<{ id: string }[]>("/api/department/classes");
-    expect(other.body.map((c) => c.id)).not.toContain(fixture.classA);
+    expect(other.body.map((c) => c.id)).not.toContain(ctx.fixture.classA);
   });
 });

@@ -3,38 +3,28 @@
  * and nothing is half-saved: the tables are byte-for-byte what they were.
  */
 import { asc } from "drizzle-orm";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { beforeAll, beforeEach, describe, expect, it } from "vitest";
 import type { ApiErrorBody } from "../../server/contracts/errors";
 import type { Roster } from "../../server/contracts/roster";
 import type { ClassSummary } from "../../server/contracts/classes";
 import { classes, rosterEntries } from "../../server/db/schema";
-import { PEOPLE, seedFixture, type Fixture } from "../support/fixtures";
+import { PEOPLE, seedFixture } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
-import { createTestDatabase, type TestDatabase } from "../support/test-database";
-import { startTestStack, type TestStack } from "../support/test-stack";
+import { useTestStack } from "../support/test-stack";
 
-let database: TestDatabase;
-let stack: TestStack;
-let fixture: Fixture;
+const ctx = useTestStack(seedFixture);
 let teacher: HttpAgent;
 
 beforeAll(async () => {
-  database = await createTestDatabase();
-  fixture = await seedFixture(database.db);
-  stack = await startTestStack(database);
-  teacher = new HttpAgent(stack.url);
+  teacher = new HttpAgent(ctx.stack.url);
   await signIn(teacher, PEOPLE.teacherA.email);
-});
-afterAll(async () => {
-  await stack?.close();
-  await database?.drop();
 });
 
 /** Everything in the two tables a class edit could touch, in a stable order. */
 async function snapshot() {
   return {
-    classes: await database.db.select().from(classes).orderBy(asc(classes.id)),
-    roster: await database.db.select().from(rosterEntries).orderBy(asc(rosterEntries.id)),
+    classes: await ctx.database.db.select().from(classes).orderBy(asc(classes.id)),
+    roster: await ctx.database.db.select().from(rosterEntries).orderBy(asc(rosterEntries.id)),
   };
 }
 let before: Awaited<ReturnType<typeof snapshot>>;
@@ -107,9 +97,9 @@ describe("creating a class with bad input", () => {
 
 describe("editing a class with bad input", () => {
   it("refuses an empty change and a blank name", async () => {
-    await expectRefused(teacher.json(`/api/classes/${fixture.classA}`, { method: "PATCH", json: {} }), 400, "validation_failed");
+    await expectRefused(teacher.json(`/api/classes/${ctx.fixture.classA}`, { method: "PATCH", json: {} }), 400, "validation_failed");
     const error = await expectRefused(
-      teacher.json(`/api/classes/${fixture.classA}`, { method: "PATCH", json: { name: "" } }),
+      teacher.json(`/api/classes/${ctx.fixture.classA}`, { method: "PATCH", json: { name: "" } }),
       400,
       "validation_failed",
     );
@@ -130,7 +120,7 @@ describe("replacing a roster with bad rows", () => {
   it("reports each bad row by its index and saves nothing", async () => {
     const names = ["Iris P.", "", "Jude Kowalczyk", "jude@pupils.example", "Iris P", "N".repeat(31), "Kofi M."];
     const error = await expectRefused(
-      teacher.json(`/api/classes/${fixture.classA}/roster`, { method: "PUT", json: { names } }),
+      teacher.json(`/api/classes/${ctx.fixture.classA}/roster`, { method: "PUT", json: { names } }),
       400,
       "validation_failed",
     );
@@ -142,15 +132,15 @@ describe("replacing a roster with bad rows", () => {
 
   it("refuses more than the limit", async () => {
     const names = Array.from({ length: 61 }, (_, i) => `Pupil ${String.fromCharCode(65 + (i % 26))}${i >= 26 ? String.fromCharCode(65 + Math.floor(i / 26)) : ""}`);
-    await expectRefused(teacher.json(`/api/classes/${fixture.classA}/roster`, { method: "PUT", json: { names } }), 400, "validation_failed");
+    await expectRefused(teacher.json(`/api/classes/${ctx.fixture.classA}/roster`, { method: "PUT", json: { names } }), 400, "validation_failed");
   });
 });
 
 describe("a good roster edit", () => {
   it("keeps the ids of unchanged names, drops removed ones and adds new ones in order", async () => {
-    const start = await teacher.json<Roster>(`/api/classes/${fixture.classA}/roster`);
+    const start = await teacher.json<Roster>(`/api/classes/${ctx.fixture.classA}/roster`);
     const idOf = (r: Roster, name: string) => r.names.find((n) => n.displayName === name)?.id;
-    const { status, body } = await teacher.json<Roster>(`/api/classes/${fixture.classA}/roster`, {
+    const { status, body } = await teacher.json<Roster>(`/api/classes/${ctx.fixture.classA}/roster`, {
       method: "PUT",
       json: { names: ["  Kofi   M. ", "Nia T.", "Iris P."] },
     });

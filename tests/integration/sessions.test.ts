@@ -1,33 +1,23 @@
 import { io as connect, type Socket } from "socket.io-client";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
 import type { SessionInfo } from "../../server/contracts/session";
 import { PROTOCOL_VERSION, type ClientToServerEvents, type ServerToClientEvents } from "../../server/contracts/socket-events";
-import { PEOPLE, seedFixture, type Fixture } from "../support/fixtures";
+import { PEOPLE, seedFixture } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
-import { createTestDatabase, type TestDatabase } from "../support/test-database";
-import { startTestStack, type TestStack } from "../support/test-stack";
+import { useTestStack } from "../support/test-stack";
 
 type ClientSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
 
-let database: TestDatabase;
-let stack: TestStack;
-let fixture: Fixture;
+const ctx = useTestStack(seedFixture);
 const sockets: ClientSocket[] = [];
 
-beforeAll(async () => {
-  database = await createTestDatabase();
-  fixture = await seedFixture(database.db);
-  stack = await startTestStack(database);
-});
 afterAll(async () => {
   for (const s of sockets) s.close();
-  await stack?.close();
-  await database?.drop();
 });
 
 /** A socket.io client carrying the agent's cookies, as a browser tab would. */
 function openSocket(agent: HttpAgent | null, protocol = PROTOCOL_VERSION): ClientSocket {
-  const socket: ClientSocket = connect(stack.url, {
+  const socket: ClientSocket = connect(ctx.stack.url, {
     transports: ["websocket"],
     auth: { protocol },
     extraHeaders: agent ? { cookie: agent.cookieHeader() } : {},
@@ -51,25 +41,25 @@ const whoami = (socket: ClientSocket) =>
 
 describe("sessions", () => {
   it("survive a server restart: they are stored in Postgres, not in the process", async () => {
-    const agent = new HttpAgent(stack.url);
+    const agent = new HttpAgent(ctx.stack.url);
     await signIn(agent, PEOPLE.teacherA.email);
-    expect((await agent.json<SessionInfo>("/api/session")).body.user?.id).toBe(fixture.staffIds.teacherA);
+    expect((await agent.json<SessionInfo>("/api/session")).body.user?.id).toBe(ctx.fixture.staffIds.teacherA);
 
-    await stack.restartApp();
+    await ctx.stack.restartApp();
 
     const after = await agent.json<SessionInfo>("/api/session");
-    expect(after.body.user?.id).toBe(fixture.staffIds.teacherA);
+    expect(after.body.user?.id).toBe(ctx.fixture.staffIds.teacherA);
     expect((await agent.get("/api/classes")).status).toBe(200);
   });
 
   it("sign-out ends the session for every tab using it, and closes its open sockets", async () => {
-    const tab1 = new HttpAgent(stack.url);
+    const tab1 = new HttpAgent(ctx.stack.url);
     await signIn(tab1, PEOPLE.teacherB.email);
     // A second tab of the same browser shares the cookie.
     const tab2 = tab1.newTab();
     const socket = openSocket(tab2);
     await connected(socket);
-    expect(await whoami(socket)).toBe(fixture.staffIds.teacherB);
+    expect(await whoami(socket)).toBe(ctx.fixture.staffIds.teacherB);
     const ended = new Promise((resolve) => socket.once("session:ended", resolve));
     const disconnected = new Promise((resolve) => socket.once("disconnect", resolve));
 
@@ -82,9 +72,9 @@ describe("sessions", () => {
   });
 
   it("sign-out everywhere ends every session of that person on every device, and only theirs", async () => {
-    const laptop = new HttpAgent(stack.url);
-    const phone = new HttpAgent(stack.url);
-    const colleague = new HttpAgent(stack.url);
+    const laptop = new HttpAgent(ctx.stack.url);
+    const phone = new HttpAgent(ctx.stack.url);
+    const colleague = new HttpAgent(ctx.stack.url);
     await signIn(laptop, PEOPLE.head.email);
     await signIn(phone, PEOPLE.head.email);
     await signIn(colleague, PEOPLE.teacherA.email);
@@ -114,7 +104,7 @@ describe("sessions", () => {
   });
 
   it("a socket opened from another site's page is refused", async () => {
-    const socket: ClientSocket = connect(stack.url, {
+    const socket: ClientSocket = connect(ctx.stack.url, {
       transports: ["websocket"],
       auth: { protocol: PROTOCOL_VERSION },
       extraHeaders: { origin: "http://evil.example" },

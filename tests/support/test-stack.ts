@@ -1,6 +1,8 @@
 import { createServer } from "node:net";
+import { afterAll, beforeAll } from "vitest";
 import { createApp, type LinkleapServer } from "../../server/app";
-import type { Database } from "../../server/db/client";
+import type { Database, Db } from "../../server/db/client";
+import { createTestDatabase, type TestDatabase } from "./test-database";
 import { createSignInProvider, signInProviderEndpoints, type ProviderAccount, type SignInProvider } from "../../server/devstack/sign-in-provider";
 import { OUTSIDER, PEOPLE } from "./fixtures";
 
@@ -36,7 +38,14 @@ const defaultAccounts: ProviderAccount[] = [
 ];
 
 /** The real app and the local sign-in provider on loopback, against a test database. */
-export async function startTestStack(database: Database, options: { clientDir?: string | null; accounts?: ProviderAccount[] } = {}): Promise<TestStack> {
+export interface TestStackOptions {
+  /** The built client to serve (or a function giving it, for folders built in a hook). */
+  clientDir?: string | null | (() => string);
+  accounts?: ProviderAccount[];
+}
+
+export async function startTestStack(database: Database, options: TestStackOptions = {}): Promise<TestStack> {
+  const clientDir = typeof options.clientDir === "function" ? options.clientDir() : (options.clientDir ?? null);
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const provider = createSignInProvider({
@@ -56,7 +65,7 @@ export async function startTestStack(database: Database, options: { clientDir?: 
         demo: true,
         sessionSecret: TEST_SESSION_SECRET,
         oauth: { clientID: "linkleap-test", clientSecret: "test-client-secret", ...signInProviderEndpoints(providerUrl) },
-        clientDir: options.clientDir ?? null,
+        clientDir,
         pruneSessions: false,
       },
       log: () => {},
@@ -80,4 +89,28 @@ export async function startTestStack(database: Database, options: { clientDir?: 
   };
   await stack.server.listen(port);
   return stack;
+}
+
+export interface TestContext<F> {
+  database: TestDatabase;
+  stack: TestStack;
+  fixture: F;
+}
+
+/**
+ * For a test file: a database of its own, seeded, with the app and sign-in provider running
+ * against it; all torn down after the file. Fields are filled before the file's first test.
+ */
+export function useTestStack<F>(seed: (db: Db) => Promise<F>, options: TestStackOptions = {}): TestContext<F> {
+  const ctx = {} as TestContext<F>;
+  beforeAll(async () => {
+    ctx.database = await createTestDatabase();
+    ctx.fixture = await seed(ctx.database.db);
+    ctx.stack = await startTestStack(ctx.database, options);
+  });
+  afterAll(async () => {
+    await ctx.stack?.close();
+    await ctx.database?.drop();
+  });
+  return ctx;
 }

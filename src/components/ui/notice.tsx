@@ -44,3 +44,17 @@ export function Notice({ tone, title, children, actions, live, className, id }: 
     </div>
   );
 }
+
+/**
+ * A form's own error after a submit: announced at once, and focusable so `useFocusFirstError`
+ * can move keyboard and screen-reader users to it.
+ */
+export function FormErrorNotice({ children, className }: { children: ReactNode; className?: string }) {
+  return (
+    <Notice tone="danger" live="alert" className={className}>
+      <p data-form-error tabIndex={-1}>
+        {children}
+      </p>
+    </Notice>
+  );
+}

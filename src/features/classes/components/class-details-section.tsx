@@ -3,7 +3,7 @@ import type { ClassSummary } from "@contracts/classes";
 import type { FieldErrors } from "@contracts/errors";
 import { Button } from "@/components/ui/button";
 import { PencilIcon } from "@/components/ui/icons";
-import { Notice } from "@/components/ui/notice";
+import { FormErrorNotice, Notice } from "@/components/ui/notice";
 import { Section } from "@/components/ui/section";
 import { useFocusFirstError } from "@/hooks/use-focus-first-error";
 import { errorMessage, isApiError } from "@/lib/api-client";
@@ -109,11 +109,7 @@ export function ClassDetailsSection({ item, onDirtyChange }: {
         >
           <ClassFields values={values} errors={errors} onChange={setValues} />
           {formError ? (
-            <Notice tone="danger" live="alert" className="mt-5">
-              <p data-form-error tabIndex={-1}>
-                {formError}
-              </p>
-            </Notice>
+            <FormErrorNotice className="mt-5">{formError}</FormErrorNotice>
           ) : null}
           <div className="mt-6 flex flex-col-reverse gap-3 sm:flex-row">
             <Button type="submit" variant="primary" busy={update.isPending}>

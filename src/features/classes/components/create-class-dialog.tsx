@@ -4,7 +4,7 @@ import type { FieldErrors } from "@contracts/errors";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { PlusIcon } from "@/components/ui/icons";
-import { Notice } from "@/components/ui/notice";
+import { FormErrorNotice } from "@/components/ui/notice";
 import { useFocusFirstError } from "@/hooks/use-focus-first-error";
 import { isApiError, errorMessage } from "@/lib/api-client";
 import { useCreateClass } from "../api/create-class";
@@ -89,11 +89,7 @@ function CreateClassDialog({ open, onClose, onCreated }: {
       <form ref={formRef} noValidate onSubmit={submit}>
         <ClassFields values={values} errors={errors} onChange={setValues} />
         {formError ? (
-          <Notice tone="danger" live="alert" className="mt-5">
-            <p data-form-error tabIndex={-1}>
-              {formError}
-            </p>
-          </Notice>
+          <FormErrorNotice className="mt-5">{formError}</FormErrorNotice>
         ) : null}
         <div className="mt-6 flex flex-col-reverse gap-3 sm:flex-row sm:justify-end">
           <Button onClick={close}>Cancel</Button>

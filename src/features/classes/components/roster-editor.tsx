@@ -3,7 +3,7 @@ import { ROSTER_LIMITS, type Roster } from "@contracts/roster";
 import { Button } from "@/components/ui/button";
 import { FieldError, CONTROL_CLASSES, TextAreaField } from "@/components/ui/field";
 import { CheckCircleIcon, ListIcon, PlusIcon, RemoveIcon, WarnIcon } from "@/components/ui/icons";
-import { Notice } from "@/components/ui/notice";
+import { FormErrorNotice } from "@/components/ui/notice";
 import { useFocusFirstError } from "@/hooks/use-focus-first-error";
 import { errorMessage, isApiError } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
@@ -174,11 +174,9 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
       </div>
 
       {submitted && rowsWithErrors > 0 ? (
-        <Notice tone="danger" live="alert" className="mb-4">
-          <p data-form-error tabIndex={-1}>
-            {plural(rowsWithErrors, "name needs", "names need")} correcting before the roster can be saved.
-          </p>
-        </Notice>
+        <FormErrorNotice className="mb-4">
+          {plural(rowsWithErrors, "name needs", "names need")} correcting before the roster can be saved.
+        </FormErrorNotice>
       ) : null}
 
       {rows.length === 0 ? (
@@ -258,11 +256,9 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
       {pasteOpen ? <PastePanel id={`${baseId}-paste`} onAdd={addPasted} onCancel={() => setPasteOpen(false)} /> : null}
 
       {formErrors.map((message) => (
-        <Notice key={message} tone="danger" live="alert" className="mt-4">
-          <p data-form-error tabIndex={-1}>
-            {message}
-          </p>
-        </Notice>
+        <FormErrorNotice key={message} className="mt-4">
+          {message}
+        </FormErrorNotice>
       ))}
 
       <div
