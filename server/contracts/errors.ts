@@ -1,21 +1,5 @@
 import { z } from "zod";
-
-/**
- * The closed set of error codes the API and the socket acknowledgements may return.
- * Messages are for people; codes are for programs. Internal details never leave the server.
- */
-export const ERROR_CODES = [
-  "bad_request",
-  "validation_failed",
-  "unauthenticated",
-  "forbidden",
-  "not_found",
-  "class_name_taken",
-  "last_admin",
-  "protocol_mismatch",
-  "internal_error",
-] as const;
-export type ErrorCode = (typeof ERROR_CODES)[number];
+import { ERROR_CODES } from "./error-codes";
 
 /** Field errors keyed by the dotted path of the field, e.g. `name` or `names.3`. */
 export const fieldErrorsSchema = z.record(z.string(), z.array(z.string()));

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import type { ErrorCode } from "./errors";
+import type { ErrorCode } from "./error-codes";
 
 /**
  * The one map of socket.io events, used as generics on both ends:

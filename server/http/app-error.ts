@@ -1,4 +1,5 @@
-import type { ErrorCode, FieldErrors } from "../contracts/errors";
+import type { ErrorCode } from "../contracts/error-codes";
+import type { FieldErrors } from "../contracts/errors";
 
 const STATUS: Record<ErrorCode, number> = {
   bad_request: 400,

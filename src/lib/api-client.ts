@@ -1,4 +1,5 @@
-import type { ApiErrorBody, ErrorCode, FieldErrors } from "@contracts/errors";
+import { isErrorCode, type ErrorCode } from "@contracts/error-codes";
+import type { ApiErrorBody, FieldErrors } from "@contracts/errors";
 
 /** Codes the client adds to the server's closed set: it never reached the server, or could not read the answer. */
 export type ClientErrorCode = "network_error" | "bad_response";
@@ -28,21 +29,6 @@ export class ApiError extends Error {
 }
 
 export const isApiError = (error: unknown): error is ApiError => error instanceof ApiError;
-
-// Type-checked against the contract: adding a code there fails compilation here until it is listed.
-const KNOWN_CODES = {
-  bad_request: true,
-  validation_failed: true,
-  unauthenticated: true,
-  forbidden: true,
-  not_found: true,
-  class_name_taken: true,
-  last_admin: true,
-  protocol_mismatch: true,
-  internal_error: true,
-} as const satisfies Record<ErrorCode, true>;
-
-const isErrorCode = (value: unknown): value is ErrorCode => typeof value === "string" && Object.hasOwn(KNOWN_CODES, value);
 
 /** What to say when a response carries no readable error body (a proxy page, an empty 502…). */
 function fallbackFor(status: number): { code: ErrorCode | ClientErrorCode; message: string } {
