@@ -73,6 +73,8 @@ export function createApp({ config, database, log = defaultLog }: AppDeps): Link
         directives: {
           // Fonts, scripts and styles all ship with the app: nothing from elsewhere.
           "img-src": ["'self'", "data:", "blob:"],
+          "font-src": ["'self'", "data:"],
+          "style-src": ["'self'", "'unsafe-inline'"],
           "connect-src": ["'self'", ...allowedOrigins],
           "upgrade-insecure-requests": secure ? [] : null,
         },
