@@ -4,26 +4,23 @@
  * listed, reloads, and it is still there.
  */
 import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_STAFF, DEMO_UNINVITED } from "../../server/db/seed/demo-data";
 import { seedDemo } from "../../server/db/seed/seed-demo";
 import { keepScreenshot, launchBrowser } from "../support/browser";
-import { buildClientForTests } from "../support/client-build";
 import { useTestStack } from "../support/test-stack";
 
 const teacher = DEMO_STAFF.find((s) => s.key === "teacherA")!;
-let clientDir: string;
 let browser: Browser;
 
 beforeAll(async () => {
-  clientDir = await buildClientForTests();
   browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
 });
 const ctx = useTestStack(seedDemo, {
-  clientDir: () => clientDir,
+  clientDir: inject("clientDir"),
   accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
 });
 

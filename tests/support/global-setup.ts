@@ -1,7 +1,8 @@
 /**
  * Once per test run (for the integration and e2e projects): start the test cluster — a
  * private PostgreSQL separate from the demo's — and build a migrated template database that
- * each test file clones into a database of its own. Browser tests also get Debian's chromium.
+ * each test file clones into a database of its own. Browser tests also get Debian's chromium
+ * and one build of the client.
  */
 import { createHash } from "node:crypto";
 import { readdirSync, readFileSync } from "node:fs";
@@ -13,12 +14,15 @@ import { migrateDatabase } from "../../server/db/migrate";
 import { startCluster, stopCluster } from "../../server/devstack/postgres";
 import { projectPath } from "../../server/paths";
 import { ensureChromium } from "./chromium";
+import { buildClientForTests } from "./client-build";
 import { TEST_PG_DIR } from "./paths";
 
 declare module "vitest" {
   export interface ProvidedContext {
     pgAdminUrl: string;
     templateDatabase: string;
+    /** The client built once for all browser tests (e2e project only). */
+    clientDir: string;
   }
 }
 
@@ -66,7 +70,10 @@ export default async function setup(project: TestProject) {
   await ensureTemplate(adminUrl, template);
   project.provide("pgAdminUrl", adminUrl);
   project.provide("templateDatabase", template);
-  if (project.name === "e2e") await ensureChromium();
+  if (project.name === "e2e") {
+    await ensureChromium();
+    project.provide("clientDir", await buildClientForTests());
+  }
 
   return async () => {
     // Vitest runs every teardown after the last test file of the whole run.

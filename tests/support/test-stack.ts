@@ -39,13 +39,13 @@ const defaultAccounts: ProviderAccount[] = [
 
 /** The real app and the local sign-in provider on loopback, against a test database. */
 export interface TestStackOptions {
-  /** The built client to serve (or a function giving it, for folders built in a hook). */
-  clientDir?: string | null | (() => string);
+  /** The built client to serve. */
+  clientDir?: string | null;
   accounts?: ProviderAccount[];
 }
 
 export async function startTestStack(database: Database, options: TestStackOptions = {}): Promise<TestStack> {
-  const clientDir = typeof options.clientDir === "function" ? options.clientDir() : (options.clientDir ?? null);
+  const clientDir = options.clientDir ?? null;
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const provider = createSignInProvider({
