@@ -1,6 +1,5 @@
 import type { ComponentType } from "react";
-import { Button } from "@/components/ui/button";
-import { ReloadIcon } from "@/components/ui/icons";
+import { ReloadPageButton } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 
 interface PageModule {
@@ -32,9 +31,7 @@ function PageLoadFailed() {
         live="alert"
         title="This page could not be loaded"
         actions={
-          <Button variant="primary" icon={<ReloadIcon />} onClick={() => window.location.reload()}>
-            Reload the page
-          </Button>
+          <ReloadPageButton />
         }
       >
         <p>The connection may have dropped, or Linkleap has just been updated. Reload the page to try again; anything you have saved is kept.</p>

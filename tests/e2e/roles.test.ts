@@ -2,32 +2,18 @@
  * Role-aware navigation in the browser: the head of department looks at a colleague's class
  * without edit controls; the school admin gets staff management and no classes.
  */
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { DEMO_STAFF, DEMO_UNINVITED } from "../../server/db/seed/demo-data";
-import { seedDemo } from "../../server/db/seed/seed-demo";
-import { keepScreenshot, launchBrowser } from "../support/browser";
-import { useTestStack } from "../support/test-stack";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { DEMO_UNINVITED } from "../../server/db/seed/demo-data";
+import { keepScreenshot, pickAccount, useDemoInBrowser } from "../support/browser";
 
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-const ctx = useTestStack(seedDemo, {
-  clientDir: inject("clientDir"),
-  accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
-});
+const ctx = useDemoInBrowser();
 
 async function signedIn(name: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const context = await ctx.browser.newContext({ viewport: { width: 1280, height: 800 } });
   const page = await context.newPage();
   await page.goto(`${ctx.stack.url}/sign-in`);
-  await page.getByRole("link", { name: "Sign in with your school account" }).click();
-  await page.getByRole("button", { name: new RegExp(name) }).click();
+  await pickAccount(page, name);
   await page.waitForURL((url) => url.origin === ctx.stack.url && !url.pathname.startsWith("/sign-in"));
   return page;
 }
@@ -68,11 +54,10 @@ describe("what each role is offered", () => {
   });
 
   it("someone who was never invited is asked to get an invitation, with the address they used", async () => {
-    const context = await browser.newContext();
+    const context = await ctx.browser.newContext();
     const page = await context.newPage();
     await page.goto(`${ctx.stack.url}/sign-in`);
-    await page.getByRole("link", { name: "Sign in with your school account" }).click();
-    await page.getByRole("button", { name: new RegExp(DEMO_UNINVITED.name) }).click();
+    await pickAccount(page, DEMO_UNINVITED.name);
     await page.waitForURL(`${ctx.stack.url}/sign-in/not-invited`);
     await page.getByRole("heading", { name: "Ask your department to invite you" }).waitFor();
     await page.getByText(DEMO_UNINVITED.email).waitFor();

@@ -3,30 +3,16 @@
  * Postgres: the demo teacher signs in through the local provider, creates a class, sees it
  * listed, reloads, and it is still there.
  */
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { DEMO_STAFF, DEMO_UNINVITED } from "../../server/db/seed/demo-data";
-import { seedDemo } from "../../server/db/seed/seed-demo";
-import { keepScreenshot, launchBrowser } from "../support/browser";
-import { useTestStack } from "../support/test-stack";
+import { describe, expect, it } from "vitest";
+import { DEMO_STAFF } from "../../server/db/seed/demo-data";
+import { keepScreenshot, pickAccount, useDemoInBrowser } from "../support/browser";
 
 const teacher = DEMO_STAFF.find((s) => s.key === "teacherA")!;
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-const ctx = useTestStack(seedDemo, {
-  clientDir: inject("clientDir"),
-  accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
-});
+const ctx = useDemoInBrowser();
 
 describe("a teacher's classes in the browser", () => {
   it("signs in as the demo teacher, creates a class, and finds it again after a reload", async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const context = await ctx.browser.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
     const problems: string[] = [];
     page.on("pageerror", (e) => problems.push(e.message));
@@ -38,9 +24,7 @@ describe("a teacher's classes in the browser", () => {
     await page.waitForURL(/\/sign-in/);
     await keepScreenshot(page, "e2e", "01-sign-in");
 
-    await page.getByRole("link", { name: "Sign in with your school account" }).or(page.getByRole("button", { name: "Sign in with your school account" })).click();
-    await page.waitForURL(`${ctx.stack.providerUrl}/**`);
-    await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
+    await pickAccount(page, teacher.displayName);
     // Back where the teacher was going.
     await page.waitForURL(`${ctx.stack.url}/classes`);
     await page.getByRole("heading", { name: "Your classes" }).waitFor();
@@ -70,11 +54,10 @@ describe("a teacher's classes in the browser", () => {
   });
 
   it("works on a narrow phone screen: the class list fits without sideways scrolling", async () => {
-    const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
+    const context = await ctx.browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
     await page.goto(`${ctx.stack.url}/sign-in`);
-    await page.getByRole("link", { name: "Sign in with your school account" }).or(page.getByRole("button", { name: "Sign in with your school account" })).click();
-    await page.getByRole("button", { name: new RegExp(teacher.displayName) }).click();
+    await pickAccount(page, teacher.displayName);
     await page.waitForURL(`${ctx.stack.url}/`);
     await page.goto(`${ctx.stack.url}/classes`);
     await page.getByText("10A Physics").first().waitFor();

@@ -1,8 +1,12 @@
 import { mkdirSync } from "node:fs";
 import { join } from "node:path";
 import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll, inject } from "vitest";
+import { DEMO_STAFF, DEMO_UNINVITED } from "../../server/db/seed/demo-data";
+import { seedDemo } from "../../server/db/seed/seed-demo";
 import { CHROMIUM_ARGS, ensureChromium } from "./chromium";
 import { TEST_OUTPUT_DIR } from "./paths";
+import { useTestStack, type TestContext } from "./test-stack";
 
 /** Debian's chromium driven by playwright-core (never a downloaded browser). */
 export async function launchBrowser(): Promise<Browser> {
@@ -17,4 +21,29 @@ export async function keepScreenshot(page: Page, group: string, name: string): P
   const path = join(dir, `${name}.png`);
   await page.screenshot({ path, fullPage: true });
   return path;
+}
+
+/**
+ * For a browser test file: the demo school in a database of its own, the app serving the
+ * client built by the global setup, the local sign-in page listing the demo accounts, and a
+ * browser. All torn down after the file.
+ */
+export function useDemoInBrowser(): TestContext<boolean> & { browser: Browser } {
+  const ctx = useTestStack(seedDemo, {
+    clientDir: inject("clientDir"),
+    accounts: [...DEMO_STAFF.map((s) => ({ email: s.email, name: s.displayName })), DEMO_UNINVITED],
+  }) as TestContext<boolean> & { browser: Browser };
+  beforeAll(async () => {
+    ctx.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await ctx.browser?.close();
+  });
+  return ctx;
+}
+
+/** From the sign-in page: the sign-in link, then the account named `name` on the local provider's page. */
+export async function pickAccount(page: Page, name: string): Promise<void> {
+  await page.getByRole("link", { name: "Sign in with your school account" }).click();
+  await page.getByRole("button", { name: new RegExp(name) }).click();
 }

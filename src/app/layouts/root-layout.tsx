@@ -1,7 +1,6 @@
 import { Outlet, ScrollRestoration } from "react-router";
 import { SkipLink } from "@/components/layout/skip-link";
-import { Button } from "@/components/ui/button";
-import { ReloadIcon } from "@/components/ui/icons";
+import { ReloadPageButton } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { useSession } from "@/features/auth/api/get-session";
 import { useSessionSocket } from "@/features/auth/hooks/use-session-socket";
@@ -24,9 +23,7 @@ export function RootLayout() {
             className="mx-auto max-w-page"
             title="This page is out of date"
             actions={
-              <Button variant="primary" icon={<ReloadIcon />} onClick={() => window.location.reload()}>
-                Reload the page
-              </Button>
+              <ReloadPageButton />
             }
           >
             <p>Linkleap has been updated since this page was opened. Reload it to keep working; nothing you have saved is lost.</p>

@@ -1,7 +1,7 @@
 import { useState } from "react";
-import { Link, useSearchParams } from "react-router";
-import type { ArchivedFilter, ClassSummary } from "@contracts/classes";
-import { ChoiceBar } from "@/components/ui/choice-bar";
+import { Link } from "react-router";
+import type { ClassSummary } from "@contracts/classes";
+import { ArchivedFilterBar } from "@/components/ui/archived-filter-bar";
 import { EmptyState } from "@/components/ui/empty-state";
 import { ErrorState } from "@/components/ui/error-state";
 import { ArchiveIcon, PeopleIcon } from "@/components/ui/icons";
@@ -12,7 +12,7 @@ import { useClasses } from "@/features/classes/api/get-classes";
 import { ClassList } from "@/features/classes/components/class-list";
 import { NewClassAction } from "@/features/classes/components/create-class-dialog";
 import { useDocumentTitle } from "@/hooks/use-document-title";
-import { ARCHIVED_FILTER_OPTIONS, archivedFilterFromParam, paramFromArchivedFilter } from "@/lib/archived-filter";
+import { useArchivedFilterParam } from "@/hooks/use-archived-filter-param";
 import { RequireRole } from "../layouts/require-role";
 
 export function Component() {
@@ -25,15 +25,9 @@ export function Component() {
 }
 
 function ClassesPage() {
-  const [params, setParams] = useSearchParams();
-  const filter = archivedFilterFromParam(params.get("show"));
+  const [filter, setFilter] = useArchivedFilterParam();
   const classes = useClasses(filter);
   const [created, setCreated] = useState<ClassSummary | null>(null);
-
-  const setFilter = (next: ArchivedFilter) => {
-    const param = paramFromArchivedFilter(next);
-    setParams(param ? { show: param } : {}, { replace: true });
-  };
 
   return (
     <>
@@ -50,18 +44,13 @@ function ClassesPage() {
           />
         }
       />
-      <div className="mb-5">
-        <ChoiceBar
-          legend="Which classes to show"
-          visibleLegend="Show"
-          options={ARCHIVED_FILTER_OPTIONS}
-          value={filter}
-          onChange={(next) => {
-            setCreated(null);
-            setFilter(next);
-          }}
-        />
-      </div>
+      <ArchivedFilterBar
+        value={filter}
+        onChange={(next) => {
+          setCreated(null);
+          setFilter(next);
+        }}
+      />
 
       {created ? (
         <Notice tone="ok" live="status" className="mb-5">

@@ -1,10 +1,9 @@
-import { useSearchParams } from "react-router";
-import { ChoiceBar } from "@/components/ui/choice-bar";
+import { ArchivedFilterBar } from "@/components/ui/archived-filter-bar";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { DepartmentClasses } from "@/features/department/components/department-classes";
 import { useDocumentTitle } from "@/hooks/use-document-title";
-import { ARCHIVED_FILTER_OPTIONS, archivedFilterFromParam, paramFromArchivedFilter } from "@/lib/archived-filter";
+import { useArchivedFilterParam } from "@/hooks/use-archived-filter-param";
 import { RequireRole } from "../layouts/require-role";
 import { useMe } from "../use-me";
 
@@ -19,8 +18,7 @@ export function Component() {
 
 function DepartmentPage() {
   const me = useMe();
-  const [params, setParams] = useSearchParams();
-  const filter = archivedFilterFromParam(params.get("show"));
+  const [filter, setFilter] = useArchivedFilterParam();
 
   return (
     <>
@@ -31,18 +29,7 @@ function DepartmentPage() {
       />
       {me.department ? (
         <>
-          <div className="mb-5">
-            <ChoiceBar
-              legend="Which classes to show"
-              visibleLegend="Show"
-              options={ARCHIVED_FILTER_OPTIONS}
-              value={filter}
-              onChange={(next) => {
-                const param = paramFromArchivedFilter(next);
-                setParams(param ? { show: param } : {}, { replace: true });
-              }}
-            />
-          </div>
+          <ArchivedFilterBar value={filter} onChange={setFilter} />
           <DepartmentClasses archived={filter} viewerId={me.id} />
         </>
       ) : (

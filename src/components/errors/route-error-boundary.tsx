@@ -1,5 +1,5 @@
 import { isRouteErrorResponse, useLocation, useNavigate, useRouteError } from "react-router";
-import { Button, ButtonLink } from "@/components/ui/button";
+import { Button, ButtonLink, ReloadPageButton } from "@/components/ui/button";
 import { ReloadIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
 import { isApiError } from "@/lib/api-client";
@@ -52,7 +52,7 @@ export function RouteErrorBoundary() {
             >
               Try again
             </Button>
-            <Button onClick={() => window.location.reload()}>Reload the page</Button>
+            <ReloadPageButton variant="secondary" />
             <ButtonLink to="/" variant="quiet">
               Go to the home page
             </ButtonLink>

@@ -1,6 +1,7 @@
 import type { ButtonHTMLAttributes, ReactNode, Ref } from "react";
 import { Link, type LinkProps } from "react-router";
 import { cx } from "@/lib/cx";
+import { ReloadIcon } from "./icons";
 import { Spinner } from "./spinner";
 
 export const BUTTON_VARIANTS = {
@@ -72,5 +73,14 @@ export function ButtonLink({ variant, size, icon, className, children, ...props 
       {icon}
       {children}
     </Link>
+  );
+}
+
+/** The one way out of an out-of-date or half-loaded page: load it again. */
+export function ReloadPageButton({ variant = "primary" }: { variant?: ButtonProps["variant"] }) {
+  return (
+    <Button variant={variant} icon={<ReloadIcon />} onClick={() => window.location.reload()}>
+      Reload the page
+    </Button>
   );
 }
