@@ -27,8 +27,8 @@ export interface ScaleInput {
  * holds the weight of the landed part λgx and stops the momentum flux λv² = 2λgx, so it reads
  * 3λgx while x < L, then λgL once the last link has landed.
  * Caveat [paper]: E. Hamm & J.-C. Géminard, "The weight of a falling chain, revisited",
- * Am. J. Phys. 78, 828 (2010): real chains fall slightly faster than free fall, and the reading
- * exceeds this idealisation; links landing on a pile can pull on the chain above.
+ * Am. J. Phys. 78, 828 (2010): real chains fall slightly faster than free fall, because links
+ * landing on the pan can pull on the chain above; measured readings depart from this idealisation.
  *
  * @throws RangeError when λ ≤ 0, L ≤ 0, x < 0 or g ≤ 0.
  */
