@@ -1,5 +1,5 @@
 import Matter from "matter-js";
-import { type PinJoint, type World, tagBody } from "../core/world";
+import { isParked, type PinJoint, type World, tagBody } from "../core/world";
 import type { ElementSpec } from "./link-shapes";
 import { layAlongPath, type Point } from "./path";
 
@@ -85,6 +85,8 @@ export function largestJointGap(chain: Chain): number {
     if (!joint.enabled) continue;
     const a = joint.a;
     const b = joint.b!;
+    // Parked links wait outside the world; their joints are not being solved.
+    if (isParked(a) || isParked(b)) continue;
     const ax = a.position.x + Math.cos(a.angle) * joint.aOffset;
     const ay = a.position.y + Math.sin(a.angle) * joint.aOffset;
     const bx = b.position.x + Math.cos(b.angle) * joint.bOffset;

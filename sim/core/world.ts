@@ -1,8 +1,12 @@
 import Matter from "matter-js";
 import { G_INTERNAL } from "./units";
 
-const { Body, Pairs, Resolver, Collision, Vertices, Axes, Bounds } = Matter;
+const { Pairs, Resolver, Collision, Vertices, Axes, Bounds } = Matter;
 type MBody = Matter.Body;
+
+// matter-js 0.20's own signatures (the published types describe 0.17).
+const bodyUpdate = Matter.Body.update as unknown as (body: MBody, deltaTime: number) => void;
+const solvePosition = Resolver.solvePosition as unknown as (pairs: Matter.Pair[], delta: number, damping: number) => void;
 
 /**
  * One end of a pin joint: a point on a body's long axis (offset in mm from its centre,
@@ -125,7 +129,7 @@ export class World {
     for (let i = 0; i < dynamic.length; i++) {
       const body = dynamic[i]!;
       body.force.y += body.mass * G_INTERNAL;
-      Body.update(body, dt);
+      bodyUpdate(body, dt);
     }
 
     this.solveJoints(jointIterations);
@@ -136,7 +140,7 @@ export class World {
     const positionDamping = Math.min(1, Math.max(0, 20 / positionIterations));
     const pairList = this.pairs.list;
     Resolver.preSolvePosition(pairList);
-    for (let i = 0; i < positionIterations; i++) Resolver.solvePosition(pairList, dt, positionDamping);
+    for (let i = 0; i < positionIterations; i++) solvePosition(pairList, dt, positionDamping);
     Resolver.postSolvePosition(dynamic);
 
     this.solveJoints(jointIterations);
@@ -397,4 +401,8 @@ export function tagBody(body: MBody, tag: LinkTag) {
 
 export function linkIndexOf(body: MBody) {
   return tagOf(body).link;
+}
+
+export function isParked(body: MBody) {
+  return tagOf(body).parked === true;
 }
