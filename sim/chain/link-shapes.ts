@@ -14,7 +14,7 @@ export const LINK_SHAPE_LABELS: Record<LinkShape, string> = {
 
 /** What a teacher can choose about the chain itself (SI units). */
 export const chainSchema = z.object({
-  linkShape: z.enum(LINK_SHAPES).default("rod").describe("Link shape"),
+  linkShape: z.enum(LINK_SHAPES, { error: `Link shape must be one of ${LINK_SHAPES.join(", ")}` }).default("rod").describe("Link shape"),
   linkLength: describedNumber("Link length (joint to joint)", "m", 0.01, 0.05, 0.02),
   aspectRatio: describedNumber("Link length ÷ thickness", "", 2, 10, 5),
   lambda: describedNumber("Mass per length", "kg/m", 0.005, 1, 0.05),

@@ -341,6 +341,8 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
           lostAtFloor: budget.lostAtFloor,
         };
       },
+      // The chain still waiting below the frozen row is stock, not drawn.
+      hidden: (i) => i >= frozenFirst() + linksPerRow && !world.isActive(bodies[i]!),
       scene: () => ({
         shapes,
         view: [-0.35 - params.potWidth, -0.02, 0.35, params.potHeight + 0.45],

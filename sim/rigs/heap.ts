@@ -21,7 +21,7 @@ export type HeapParams = z.output<typeof heapSchema>;
 export const HEAP_BAND: [number, number] = [0.2, 1.0];
 /** The lift speeds up smoothly over this time, s, instead of jerking the chain. */
 const RAMP_S = 0.04;
-const HEAP_WIDTH_MM = 100;
+const HEAP_WIDTH_MM = 60;
 
 export const heapRig: RigDefinition<typeof heapSchema> = {
   id: "heap",
@@ -51,7 +51,7 @@ export const heapRig: RigDefinition<typeof heapSchema> = {
       const x = row % 2 === 0 ? -HEAP_WIDTH_MM / 2 + jitter : HEAP_WIDTH_MM / 2 - jitter;
       path.push({ x, y: startY - (row % 2) * 0.5 });
     }
-    const chain = buildChain(world, path, elements, { noSelfCollision: true });
+    const chain = buildChain(world, path, elements, { noSelfCollision: true, friction: 0 });
     const first = chain.bodies[0]!;
     const endX = 0;
     const endY = startY;

@@ -38,6 +38,8 @@ export interface RigInstance {
   scene(): SceneLayout;
   /** A body moved by the rig that should be drawn with the chain (the scale pan, the puller). */
   movingShapes?(): SceneShape[];
+  /** Elements not to draw right now (e.g. chain still waiting deep in the pot). */
+  hidden?(index: number): boolean;
 }
 
 export interface RigDefinition<S extends z.ZodType = z.ZodType> {

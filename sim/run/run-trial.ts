@@ -15,8 +15,8 @@ export interface ElementLook {
 
 /**
  * A recorded trial: frames for drawing at a fixed rate, probe series, settled values.
- * positions[f] holds x, y (m, y up) and angle (rad, anticlockwise) of every element at
- * frame f, as a Float32Array so a worker can hand it over without copying.
+ * frames[f] holds x, y (m, y up) and angle (rad, anticlockwise) of every element at
+ * frame f (NaN: not drawn), as a Float32Array so a worker can hand it over without copying.
  */
 export interface TrialRecording {
   rig: string;
@@ -99,12 +99,18 @@ export class TrialRunner {
       if (t >= this.nextProbe / this.probeRate - 1e-9) {
         instance.sample(t);
         this.nextProbe++;
-        if (this.nextProbe % 50 === 0) this.checkHealth(t);
+        this.checkHealth(t);
       }
       instance.step();
       if (this.time >= this.duration - 1e-9 || instance.finished()) {
         this.checkHealth(this.time);
         this.done = true;
+        // The last moment is a frame too, so playback ends where the run did.
+        if (this.frameRate > 0 && this.time >= this.nextFrame / this.frameRate - 1e-9) {
+          this.frames.push(snapshot(instance));
+          if (instance.movingShapes) this.moving.push(instance.movingShapes());
+          this.nextFrame++;
+        }
       }
     }
     if (this.now) this.wall += (this.now() - started) / 1000;
@@ -121,6 +127,11 @@ export class TrialRunner {
       // 100 m/s is far beyond any drop the rigs allow (√(2g·3 m) ≈ 8 m/s).
       if (!Number.isFinite(speed) || speed > 100) throw new UnstableRunError(`a link reached ${speed.toFixed(0)} m/s`, t);
     }
+  }
+
+  /** The current positions, in the frame layout of TrialRecording.frames. */
+  frame(): Float32Array {
+    return snapshot(this.instance);
   }
 
   result(): TrialRecording {
@@ -159,6 +170,10 @@ function snapshot(instance: RigInstance): Float32Array {
   const out = new Float32Array(bodies.length * 3);
   for (let i = 0; i < bodies.length; i++) {
     const body = bodies[i]!;
+    if (instance.hidden?.(i)) {
+      out[i * 3] = out[i * 3 + 1] = out[i * 3 + 2] = Number.NaN;
+      continue;
+    }
     out[i * 3] = metres(body.position.x);
     out[i * 3 + 1] = -metres(body.position.y);
     out[i * 3 + 2] = -body.angle;
