@@ -41,7 +41,7 @@ const THREAD_THICKNESS_MM = 0.8;
 /**
  * The repeating pattern of elements for one link pitch. Geometry choices (common practice
  * for toy models, not from a source): tubes fill 80 % of the pitch with string between;
- * balls are 75 % of the pitch across; beads are pitch/aspect across, 75 % of the mass.
+ * balls are 60 % of the pitch across; beads are pitch/aspect across, 75 % of the mass.
  */
 export function elementPattern(chain: ChainSpec): ElementSpec[] {
   const p = mm(chain.linkLength);
@@ -57,7 +57,7 @@ export function elementPattern(chain: ChainSpec): ElementSpec[] {
       return [{ kind: "tube", pitch: p, length, thickness, mass: massPerPitch, inertia: massPerPitch * ((radius * radius) / 2 + (length * length) / 12) }];
     }
     case "ball": {
-      const diameter = 0.75 * p;
+      const diameter = 0.6 * p;
       const radius = diameter / 2;
       // Solid sphere: (2/5) m R² [textbook].
       return [{ kind: "ball", pitch: p, length: diameter, thickness: diameter, mass: massPerPitch, inertia: 0.4 * massPerPitch * radius * radius }];

@@ -69,13 +69,13 @@ describe("the shipped rod set-up", () => {
     // Published measurements put real chains near h2/h1 ≈ 0.1 [memory, physics-reference §1];
     // an examiners' fit gives α ≈ 0.12, β ≈ 0, i.e. h2/h1 = 0.136 (Singapore Physics Olympiad
     // Training, examiner's report, 2018 selection test, problem 1). Recorded at calibration:
-    // 0.137 ± 0.008 at 1 m (seed 1, 836 links); the pin allows for run-to-run noise.
+    // 0.143 ± 0.008 at 1 m (seed 1, 836 links); the pin allows for run-to-run noise.
     const run = runs.rod![1]!;
     expect(run.params.potHeight).toBe(1);
     const ratio = run.measured.riseRatio!.value;
     expect(ratio).toBeGreaterThan(0.08);
     expect(ratio).toBeLessThan(0.2);
-    expect(Math.abs(ratio - 0.137)).toBeLessThan(0.025);
+    expect(Math.abs(ratio - 0.143)).toBeLessThan(0.025);
   });
 });
 
@@ -133,7 +133,8 @@ describe("running a trial", () => {
     const runner = new TrialRunner(fountainRig, { links: 250 }, { frameRate: 0 });
     runner.advance(400);
     // Tear the chain as a blown-up solve would: one link jumps far from its neighbours.
-    const link = runner.instance.world.dynamic.find((body) => body.plugin.link === 3)!;
+    const moving = runner.instance.world.dynamic;
+    const link = moving[Math.floor(moving.length / 2)]!;
     link.position.x += 500;
     expect(() => runner.advance(400)).toThrow(UnstableRunError);
   });

@@ -35,6 +35,9 @@ const WALL_MM = 6;
 const LEFT_PILE_MARGIN_MM = 8;
 /** Links this close to the floor (centre, mm) have landed. */
 const LANDED_MM = 25;
+/** Below this height (mm) a link moving slower than RESTING_SPEED (m/s) has landed on the heap. */
+const RESTING_ON_HEAP_MM = 300;
+const RESTING_SPEED = 0.5;
 /** Landed links kept in the world (the rest are parked where they lie). */
 const KEPT_ON_FLOOR = 8;
 /** The pile's support follows its target height with this lag, ms. */
@@ -184,6 +187,14 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
     };
     const inPot = (body: Matter.Body) => body.position.y > firstLyingY && body.position.x < xR;
 
+    // On the floor, or come to rest on the heap of links already there.
+    const hasLanded = (body: Matter.Body) => {
+      if (body.position.y > -LANDED_MM) return true;
+      if (body.position.y < -RESTING_ON_HEAP_MM) return false;
+      const step = Math.hypot(body.position.x - body.positionPrev.x, body.position.y - body.positionPrev.y);
+      return step / world.settings.dt < RESTING_SPEED;
+    };
+
     const updatePile = () => {
       // Count the loose links still lying in the pot (only the last few rows can be there).
       const end = frozenFirst();
@@ -210,7 +221,7 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
       for (const i of frozen) world.moveKinematic(bodies[i]!, bodies[i]!.position.x, baseY[i]! - lift);
       world.moveKinematic(piston.body, piston.body.position.x, firstRowY + (frozenRow + 0.5) * rowSpacing + 2.5 - lift);
       // Landed links: keep the last few moving, park the rest where they lie.
-      while (landed < firstLying && bodies[landed]!.position.y > -LANDED_MM) landed++;
+      while (landed < firstLying && hasLanded(bodies[landed]!)) landed++;
       while (parkedOnFloor < landed - KEPT_ON_FLOOR) {
         world.park(bodies[parkedOnFloor]!);
         const joint = chain.joints[parkedOnFloor];
