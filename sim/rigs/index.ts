@@ -2,9 +2,11 @@ import { fountainRig } from "./fountain";
 import { hangingRig } from "./hanging";
 import { heapRig } from "./heap";
 import type { RigDefinition, RigId } from "./rig";
+import { scaleRig } from "./scale";
 
 export const RIGS = {
   fountain: fountainRig,
   hanging: hangingRig,
   heap: heapRig,
+  scale: scaleRig,
 } satisfies Partial<Record<RigId, RigDefinition>>;
