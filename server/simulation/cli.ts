@@ -91,6 +91,7 @@ export function runCli(argv: string[], now: () => number = () => performance.now
       measured,
       uncertainty,
       theory: recording.theory,
+      notes: rig.notes ?? [],
       run: { dt: recording.run.dt, steps: recording.run.steps, simulatedSeconds: recording.run.simulatedSeconds, wallSeconds: recording.run.wallSeconds },
     };
     if (values.json) return { code: 0, out: `${JSON.stringify(result)}\n`, err: "" };
@@ -98,7 +99,8 @@ export function runCli(argv: string[], now: () => number = () => performance.now
       const theory = recording.theory[key];
       return `  ${key.padEnd(16)} ${format(v.value)} ± ${format(v.uncertainty)} ${v.unit}${theory === undefined ? "" : `   (theory ${format(theory)})`}`;
     });
-    const out = [`${rig.label}, seed ${seed}`, ...rows, `  ${recording.run.steps} steps of ${recording.run.dt * 1000} ms: ${recording.run.simulatedSeconds.toFixed(2)} s simulated in ${recording.run.wallSeconds?.toFixed(2)} s`].join("\n");
+    const notes = (rig.notes ?? []).map((note) => `Note: ${note}`);
+    const out = [`${rig.label}, seed ${seed}`, ...rows, ...notes, `  ${recording.run.steps} steps of ${recording.run.dt * 1000} ms: ${recording.run.simulatedSeconds.toFixed(2)} s simulated in ${recording.run.wallSeconds?.toFixed(2)} s`].join("\n");
     return { code: 0, out: `${out}\n`, err: "" };
   } catch (error) {
     if (error instanceof ParamError) return { code: 2, out: "", err: `${error.message}\n` };

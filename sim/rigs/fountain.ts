@@ -10,6 +10,7 @@ import { describedNumber } from "../params";
 import { newSeries, type Settled, settleOver, settleValues } from "../probes/series";
 import { fountainEnergyBudget, fountainSteady } from "../theory/fountain";
 import { idealAlphaBound } from "../theory/link-push";
+import { CALIBRATED_PILE_NOTE, ROD_KICK_MODEL_NOTE } from "../theory/theory-notes";
 import { createWorld, staticBox, staticCircle, stepSchema } from "./common";
 import type { RigDefinition, SceneShape } from "./rig";
 
@@ -54,6 +55,7 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
   summary: "A long chain pours out of a raised pot, leaps above the rim and falls to the floor.",
   schema: fountainSchema,
   headline: { key: "rise", label: "Rise above the rim", unit: "m" },
+  notes: [CALIBRATED_PILE_NOTE, ROD_KICK_MODEL_NOTE],
   create(params, seed) {
     const random = seededRandom(seed);
     const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params) });

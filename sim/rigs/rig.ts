@@ -48,6 +48,8 @@ export interface RigDefinition<S extends z.ZodType = z.ZodType> {
   /** One line for pupils: what happens in this rig. */
   summary: string;
   schema: S;
+  /** Plain notes to show wherever this rig's results are shown. */
+  notes?: string[];
   /** The value pupils are usually asked to predict, by default. */
   headline: { key: string; label: string; unit: string };
   create(params: z.output<S>, seed: number): RigInstance;

@@ -26,10 +26,16 @@ export class LiveSimulation {
     return this.runner.done;
   }
 
-  /** Advance by up to `seconds` of simulated time; returns the frame to draw. */
+  /** Advance by `seconds` of simulated time (or as much as one call may do); returns the frame to draw. */
   advance(seconds: number): Float32Array {
     const dt = this.runner.instance.world.settings.dt / 1000;
-    this.runner.advance(Math.min(MAX_STEPS_PER_CALL, Math.max(1, Math.round(seconds / dt))));
+    this.target += seconds;
+    const wanted = Math.floor((this.target - this.runner.time) / dt + 1e-9);
+    this.runner.advance(Math.min(MAX_STEPS_PER_CALL, Math.max(0, wanted)));
+    // Behind after a capped call: drop the missed time rather than try to catch up.
+    if (wanted > MAX_STEPS_PER_CALL) this.target = this.runner.time;
     return this.runner.frame();
   }
+
+  private target = 0;
 }
