@@ -1,3 +1,4 @@
+import { foldedRig } from "./folded";
 import { fountainRig } from "./fountain";
 import { hangingRig } from "./hanging";
 import { heapRig } from "./heap";
@@ -9,4 +10,5 @@ export const RIGS = {
   hanging: hangingRig,
   heap: heapRig,
   scale: scaleRig,
+  folded: foldedRig,
 } satisfies Partial<Record<RigId, RigDefinition>>;
