@@ -65,6 +65,10 @@ export function authRoutes({ db, passport, realtime, demo, publicUrl, secureCook
           req.session.signInNotice = { kind: "not_invited", email: info.email };
           return res.redirect("/sign-in/not-invited");
         }
+        if (info && "kind" in info && (info.kind === "invitation_closed" || info.kind === "invitation_other_account")) {
+          req.session.signInNotice = info;
+          return res.redirect("/sign-in");
+        }
         req.session.signInNotice = { kind: "sign_in_failed" };
         return res.redirect("/sign-in");
       }
