@@ -1,5 +1,6 @@
 import { Router } from "express";
 import { inviteStaffInputSchema } from "../contracts/invitations";
+import { redirectWithNotice } from "../auth/auth.routes";
 import { actorOf, requireRole } from "../auth/guards";
 import { parseId, parseInput } from "../http/validate";
 import { listOpenInvitations } from "./invitations.repository";
@@ -22,17 +23,14 @@ export function invitationsRoutes(deps: InvitationDeps) {
    * The link in the e-mail. It only starts sign-in: the invitation is accepted once the
    * provider vouches for the invited address (see acceptInvitationOnSignIn).
    */
-  router.get("/auth/invitation/:token", async (req, res) => {
+  router.get("/auth/invitation/:token", async (req, res, next) => {
     // Sign-in must start on the public host, or its state cookie would not come back.
     if (req.headers.host !== publicHost) return res.redirect(`${deps.publicUrl}${req.originalUrl}`);
     const { row, closed } = await invitationForToken(db, req.params.token);
-    if (!row || closed) {
-      req.session.signInNotice = { kind: "invitation_closed", reason: closed ?? "unknown" };
-      return res.redirect("/sign-in");
-    }
+    if (!row || closed) return redirectWithNotice(req, res, next, { kind: "invitation_closed", reason: closed ?? "unknown" }, "/sign-in");
     delete req.session.signInNotice;
     req.session.invitationId = row.id;
-    res.redirect("/auth/google");
+    req.session.save((error) => (error ? next(error) : res.redirect("/auth/google")));
   });
 
   router.use("/api/invitations", requireRole("admin"));

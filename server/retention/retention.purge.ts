@@ -5,7 +5,7 @@ import { purgeDeletions, purgeRuns, schools } from "../db/schema";
 import { PUPIL_DATA_TARGETS } from "./retention.targets";
 
 /** Arbitrary constant: only one purge at a time across every Linkleap process on this database. */
-const PURGE_LOCK_KEY = 7_531_902_419;
+export const PURGE_LOCK_KEY = 7_531_902_419;
 
 export type PurgeTrigger = (typeof purgeRuns.$inferInsert)["trigger"];
 
