@@ -10,6 +10,8 @@ export const invitationsQueryOptions = () =>
   queryOptions({
     queryKey: staffKeys.invitations(),
     queryFn: ({ signal }) => getInvitations(signal),
+    // Invitations are accepted elsewhere (by the invited person): check again whenever the page is shown.
+    staleTime: 0,
   });
 
 export const useInvitations = () => useQuery(invitationsQueryOptions());
