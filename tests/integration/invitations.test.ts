@@ -11,7 +11,7 @@ import { auditEvents, staff, staffInvitations } from "../../server/db/schema";
 import type { CaughtMail } from "../../server/devstack/mail-catcher";
 import { PEOPLE, seedFixture } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
-import { useTestStack } from "../support/test-stack";
+import { freePort, startTestStack, useTestStack } from "../support/test-stack";
 
 const ctx = useTestStack(seedFixture);
 let admin: HttpAgent;
@@ -213,5 +213,26 @@ describe("inviting a member of staff", () => {
   it("an admin may be invited without a department", async () => {
     const { invitation } = await invite({ email: "pia.lund@northfen.example", displayName: "Pia Lund", role: "admin", departmentId: null });
     expect(invitation).toMatchObject({ role: "admin", department: null });
+  });
+
+  it("when the mail server cannot be reached, says the invitation is saved but not sent, and lists it as not sent", async () => {
+    // An SMTP port nobody listens on: nodemailer's real connection fails.
+    const unreachable = await startTestStack(ctx.database, { smtpPort: await freePort() });
+    try {
+      const agent = new HttpAgent(unreachable.url);
+      await signIn(agent, PEOPLE.admin.email);
+      const email = "sol.ames@northfen.example";
+      const { status, body } = await agent.json<ApiErrorBody>("/api/invitations", {
+        method: "POST",
+        json: { email, displayName: "Sol Ames", role: "teacher", departmentId: ctx.fixture.departmentId },
+      });
+      expect(status).toBe(502);
+      expect(body.error.code).toBe("mail_not_sent");
+      expect(body.error.message).toMatch(/saved.*Resend/);
+      const listed = (await agent.json<Invitation[]>("/api/invitations")).body.find((i) => i.email === email);
+      expect(listed).toMatchObject({ state: "pending", lastSentAt: null });
+    } finally {
+      await unreachable.close();
+    }
   });
 });

@@ -54,6 +54,8 @@ export interface TestStackOptions {
   demo?: boolean;
   /** The purge's cron pattern; off by default, so tests run the purge themselves. */
   purgeSchedule?: string | null;
+  /** SMTP port to send through instead of the stack's own local server (e.g. one nobody listens on). */
+  smtpPort?: number;
 }
 
 export async function startTestStack(database: Database, options: TestStackOptions = {}): Promise<TestStack> {
@@ -71,7 +73,12 @@ export async function startTestStack(database: Database, options: TestStackOptio
   const mailDir = join(TEST_DATA_DIR, "mail", randomBytes(5).toString("hex"));
   const mail = createMailCatcher({ dir: mailDir });
   const smtp = await mail.listen(0);
-  const mailer = createMailer({ host: "127.0.0.1", port: smtp.port, secure: false, from: "Linkleap <linkleap@northfen.example>" });
+  const mailer = createMailer({
+    host: "127.0.0.1",
+    port: options.smtpPort ?? smtp.port,
+    secure: false,
+    from: "Linkleap <linkleap@northfen.example>",
+  });
 
   const makeApp = () =>
     createApp({
