@@ -18,7 +18,7 @@ const formatDate = (date: Date) =>
 
 /** The invitation message, as plain text and HTML. Staff details only: no pupil data ever goes in. */
 export function invitationMail(d: InvitationMailDetails): OutgoingMail {
-  const role = STAFF_ROLE_LABELS[d.role].toLowerCase();
+  const role = `${d.role === "head_of_department" ? "" : "a "}${STAFF_ROLE_LABELS[d.role].toLowerCase()}`;
   const where = d.departmentName ? `${role} in the ${d.departmentName} department` : role;
   const who = d.invitedBy ? `${d.invitedBy} has invited you` : "You have been invited";
   const expires = formatDate(d.expiresAt);

@@ -42,7 +42,7 @@ describe("the school admin in the browser", () => {
     await message.getByRole("heading", { name: "Your invitation to Linkleap at Brackenfold Academy" }).waitFor();
     const body = await message.locator("pre").innerText();
     expect(body).toContain("Hello Noor Haddad");
-    expect(body).toContain("teacher in the Science department");
+    expect(body).toContain("as a teacher in the Science department");
     await keepScreenshot(page, "e2e", "08-admin-captured-mail");
 
     // The invited teacher, in another browser, follows the link and signs in with that address.

@@ -58,7 +58,7 @@ describe("inviting a member of staff", () => {
     // The message as the SMTP server got it: plain text and HTML, the same link in both, no pupil names.
     expect(mail.subject).toBe("Your invitation to Linkleap at Northfen School");
     expect(mail.text).toContain("Hello Jun Reyes");
-    expect(mail.text).toContain("head of department in the Mathematics department");
+    expect(mail.text).toContain("Dov Marsh has invited you to use Linkleap at Northfen School, as head of department in the Mathematics department.");
     const path = linkIn(mail);
     expect(mail.html).toContain(`${ctx.stack.url}${path}`);
     for (const pupil of ["Iris P.", "Jude K.", "Kofi M."]) expect(mail.text + mail.html).not.toContain(pupil);
