@@ -13,9 +13,14 @@ import { createSessionMiddleware } from "./auth/session";
 import { classesRoutes } from "./classes/classes.routes";
 import type { Database } from "./db/client";
 import { departmentRoutes } from "./department/department.routes";
+import { devMailRoutes } from "./dev-mail/dev-mail.routes";
 import { AppError } from "./http/app-error";
 import { apiNotFound, errorMiddleware } from "./http/error-middleware";
+import { invitationsRoutes } from "./invitations/invitations.routes";
+import type { Mailer } from "./mail/mailer";
 import { createRealtime, type IoServer, type Realtime } from "./realtime/realtime";
+import { retentionRoutes } from "./retention/retention.routes";
+import { DEFAULT_PURGE_SCHEDULE, startPurgeSchedule, type PurgeSchedule } from "./retention/retention.scheduler";
 import { staffRoutes } from "./staff/staff.routes";
 
 export interface AppConfig {
@@ -34,11 +39,17 @@ export interface AppConfig {
   pruneSessions?: boolean;
   /** Express "trust proxy" setting when behind a reverse proxy that terminates TLS. */
   trustProxy?: boolean | number | string;
+  /** Folder of the local SMTP server's captured messages, listed for admins in demo mode. */
+  mailDir?: string | null;
+  /** Cron pattern of the retention purge; null runs no schedule (tests run the purge themselves). */
+  purgeSchedule?: string | null;
 }
 
 export interface AppDeps {
   config: AppConfig;
   database: Database;
+  /** Sends invitations; the caller creates and closes it. */
+  mailer: Pick<Mailer, "send">;
   log?: (message: string, error?: unknown) => void;
 }
 
@@ -55,7 +66,7 @@ const defaultLog = (message: string, error?: unknown) =>
   error === undefined ? console.log(message) : console.error(message, error);
 
 /** Builds the HTTP server, API, sockets and static client. Starting and stopping is the caller's. */
-export function createApp({ config, database, log = defaultLog }: AppDeps): LinkleapServer {
+export function createApp({ config, database, mailer, log = defaultLog }: AppDeps): LinkleapServer {
   const { db, pool } = database;
   const publicUrl = config.publicUrl.replace(/\/$/, "");
   const secure = publicUrl.startsWith("https://");
@@ -116,9 +127,16 @@ export function createApp({ config, database, log = defaultLog }: AppDeps): Link
       log,
     }),
   );
+  const purgeSchedule: PurgeSchedule | null =
+    config.purgeSchedule === null ? null : startPurgeSchedule(db, { pattern: config.purgeSchedule ?? DEFAULT_PURGE_SCHEDULE, log });
+
+  app.use(invitationsRoutes({ db, mailer, publicUrl, log }));
+  // Before the classes router: admins may delete a class's pupil data, and its guard would stop them.
+  app.use(retentionRoutes(db, purgeSchedule));
   app.use(classesRoutes(db));
   app.use(departmentRoutes(db));
   app.use(staffRoutes(db, realtime));
+  if (config.demo && config.mailDir) app.use(devMailRoutes(config.mailDir));
   app.use("/api", apiNotFound);
 
   const clientDir = config.clientDir;
@@ -152,6 +170,7 @@ export function createApp({ config, database, log = defaultLog }: AppDeps): Link
       });
     },
     async close() {
+      await purgeSchedule?.stop();
       // io.close() also closes the http server; end sockets first so it can finish.
       realtime.io.disconnectSockets(true);
       await new Promise<void>((resolve) => {

@@ -10,6 +10,7 @@ import { connectDatabase } from "./db/client";
 import { migrateDatabase } from "./db/migrate";
 import { describeStack, startStack } from "./devstack/stack";
 import { StopList, stopOnSignals } from "./lifecycle";
+import { createMailer } from "./mail/mailer";
 import { projectPath } from "./paths";
 
 async function main() {
@@ -32,6 +33,7 @@ async function main() {
       buildClient: process.env.LINKLEAP_SKIP_BUILD !== "1",
       clientDir,
       sessionSecret: env.SESSION_SECRET,
+      mailFrom: env.MAIL_FROM,
       stopPostgresOnExit: true,
     }, stops);
     console.log(describeStack(stack, dataDir));
@@ -42,8 +44,18 @@ async function main() {
     const database = connectDatabase(env.DATABASE_URL!);
     stops.push(() => database.close());
     await migrateDatabase(database.pool);
+    const mailer = createMailer({
+      host: env.SMTP_HOST!,
+      port: env.SMTP_PORT,
+      secure: env.SMTP_SECURE,
+      user: env.SMTP_USER,
+      pass: env.SMTP_PASS,
+      from: env.MAIL_FROM,
+    });
+    stops.push(async () => mailer.close());
     const server = createApp({
       database,
+      mailer,
       config: {
         publicUrl: env.PUBLIC_URL!,
         demo: false,

@@ -1,4 +1,4 @@
-import { Router, type Request } from "express";
+import { Router, type NextFunction, type Request, type Response } from "express";
 import { sql } from "drizzle-orm";
 import type { SessionInfo } from "../contracts/session";
 import type { Me } from "../contracts/staff";
@@ -29,6 +29,21 @@ export function safeReturnTo(value: unknown): string | undefined {
   return value;
 }
 
+/**
+ * Keeps a notice for the sign-in page and redirects there once it is stored: express-session
+ * would otherwise send the redirect while still saving, and the next page could miss the notice.
+ */
+export function redirectWithNotice(
+  req: Request,
+  res: Response,
+  next: NextFunction,
+  notice: NonNullable<SessionInfo["notice"]>,
+  to: string,
+) {
+  req.session.signInNotice = notice;
+  req.session.save((error) => (error ? next(error) : res.redirect(to)));
+}
+
 interface AuthRouteDeps {
   db: Db;
   passport: AppPassport;
@@ -55,18 +70,19 @@ export function authRoutes({ db, passport, realtime, demo, publicUrl, secureCook
 
   router.get("/auth/google/callback", (req, res, next) => {
     if (typeof req.query.error === "string") {
-      req.session.signInNotice = { kind: req.query.error === "access_denied" ? "sign_in_cancelled" : "sign_in_failed" };
-      return res.redirect("/sign-in");
+      const kind = req.query.error === "access_denied" ? "sign_in_cancelled" : "sign_in_failed";
+      return redirectWithNotice(req, res, next, { kind }, "/sign-in");
     }
     passport.authenticate("google", (error: unknown, user: Express.User | false, info?: SignInRefusal | { message?: string }) => {
       if (error || !user) {
         if (error) log("[auth] sign-in failed", error);
         if (info && "kind" in info && info.kind === "not_invited") {
-          req.session.signInNotice = { kind: "not_invited", email: info.email };
-          return res.redirect("/sign-in/not-invited");
+          return redirectWithNotice(req, res, next, { kind: "not_invited", email: info.email }, "/sign-in/not-invited");
         }
-        req.session.signInNotice = { kind: "sign_in_failed" };
-        return res.redirect("/sign-in");
+        if (info && "kind" in info && (info.kind === "invitation_closed" || info.kind === "invitation_other_account")) {
+          return redirectWithNotice(req, res, next, info, "/sign-in");
+        }
+        return redirectWithNotice(req, res, next, { kind: "sign_in_failed" }, "/sign-in");
       }
       const returnTo = req.session.returnTo;
       // req.logIn regenerates the session (no fixation); returnTo is read before that.
@@ -77,7 +93,7 @@ export function authRoutes({ db, passport, realtime, demo, publicUrl, secureCook
     })(req, res, next);
   });
 
-  const clearCookie = (res: import("express").Response) =>
+  const clearCookie = (res: Response) =>
     res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: "lax", secure: secureCookies, path: "/" });
 
   router.post("/auth/sign-out", (req, res, next) => {

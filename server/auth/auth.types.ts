@@ -1,3 +1,4 @@
+import type { SessionInfo } from "../contracts/session";
 import type { Actor } from "../staff/staff.repository";
 
 declare global {
@@ -14,7 +15,9 @@ declare module "express-session" {
     /** Where to go after sign-in (a local path). */
     returnTo?: string;
     /** Why the last sign-in did not lead to an account; shown once by the client. */
-    signInNotice?: { kind: "not_invited"; email: string } | { kind: "sign_in_cancelled" } | { kind: "sign_in_failed" };
+    signInNotice?: NonNullable<SessionInfo["notice"]>;
+    /** The invitation whose link started this sign-in (cleared when sign-in regenerates the session). */
+    invitationId?: string;
   }
 }
 

@@ -11,6 +11,10 @@ export const ERROR_CODES = [
   "not_found",
   "class_name_taken",
   "last_admin",
+  "already_staff",
+  "invitation_pending",
+  "invitation_closed",
+  "mail_not_sent",
   "protocol_mismatch",
   "internal_error",
 ] as const;

@@ -62,23 +62,8 @@ export const rosterInputSchema = z.object({
     .array(z.string({ error: "Each name must be text." }))
     .max(ROSTER_LIMITS.entries, `A roster holds at most ${ROSTER_LIMITS.entries} names.`)
     .superRefine((names, ctx) => {
-      const firstSeen = new Map<string, number>();
-      names.forEach((raw, i) => {
-        const check = checkRosterName(raw);
-        if (!check.ok) {
-          ctx.addIssue({ code: "custom", path: [i], message: check.message, params: { problem: check.problem } });
-          return;
-        }
-        const key = rosterNameKey(check.value);
-        const first = firstSeen.get(key);
-        if (first === undefined) firstSeen.set(key, i);
-        else
-          ctx.addIssue({
-            code: "custom",
-            path: [i],
-            message: `Same name as row ${first + 1}: add a letter to tell them apart.`,
-            params: { problem: "duplicate" },
-          });
+      classifyRosterRows(names).forEach((verdict, i) => {
+        if (!verdict.ok) ctx.addIssue({ code: "custom", path: [i], message: verdict.message, params: { problem: verdict.problem } });
       });
     })
     .transform((names) => names.map(tidyRosterName)),
@@ -91,3 +76,38 @@ export const rosterSchema = z.object({
   updatedAt: z.string().nullable(),
 });
 export type Roster = z.infer<typeof rosterSchema>;
+
+export type RosterRowVerdict =
+  | { ok: true; value: string }
+  | {
+      ok: false;
+      problem: RosterNameProblem;
+      message: string;
+      /** For a duplicate: the index of the row it repeats. */
+      duplicateOf?: number;
+    };
+
+/**
+ * Every row of a list of names judged on its own, blank rows included (an uploaded file's rows
+ * are shown one by one): the same rules as `rosterInputSchema`, so a preview says what the
+ * server will say. A repeated name is refused on its second and later rows.
+ */
+export function classifyRosterRows(raws: readonly string[]): RosterRowVerdict[] {
+  const firstSeen = new Map<string, number>();
+  return raws.map((raw, i) => {
+    const check = checkRosterName(raw);
+    if (!check.ok) return check;
+    const key = rosterNameKey(check.value);
+    const first = firstSeen.get(key);
+    if (first !== undefined) {
+      return {
+        ok: false,
+        problem: "duplicate",
+        message: `Same name as row ${first + 1}: add a letter to tell them apart.`,
+        duplicateOf: first,
+      };
+    }
+    firstSeen.set(key, i);
+    return check;
+  });
+}

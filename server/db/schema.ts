@@ -16,14 +16,20 @@ import {
   uuid,
   varchar,
 } from "drizzle-orm/pg-core";
+import type { PupilDataKind } from "../contracts/retention";
+import { DEFAULT_RETENTION, RETENTION_PERIODS } from "../contracts/retention";
 import { STAFF_ROLES } from "../contracts/staff-roles";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
 
+export const retentionPeriod = pgEnum("retention_period", RETENTION_PERIODS);
+
 export const schools = pgTable("schools", {
   id: uuid("id").primaryKey().defaultRandom(),
   name: text("name").notNull(),
+  /** How long pupil data is kept before the scheduled purge deletes it. */
+  pupilDataRetention: retentionPeriod("pupil_data_retention").notNull().default(DEFAULT_RETENTION),
   createdAt: createdAt(),
 });
 
@@ -43,8 +49,9 @@ export const departments = pgTable(
 export const staffRole = pgEnum("staff_role", STAFF_ROLES);
 
 /**
- * Staff who may sign in. A row is the invitation: sign-in matches the verified e-mail
- * address from the identity provider, then remembers the provider's subject id.
+ * Staff who may sign in. Sign-in matches the verified e-mail address from the identity
+ * provider (once), then remembers the provider's subject id. New staff arrive through
+ * `staff_invitations`: accepting one creates (or restores) the row.
  */
 export const staff = pgTable(
   "staff",
@@ -116,6 +123,81 @@ export const rosterEntries = pgTable(
     uniqueIndex("roster_entries_class_name_key").on(t.classId, sql`lower(${t.displayName})`),
     index("roster_entries_class_idx").on(t.classId, t.position),
   ],
+);
+
+/**
+ * An admin's invitation to join the school's staff. Only a hash of the link's token is kept, so
+ * a copy of the database cannot be turned into working links. An invitation is open while it is
+ * neither accepted nor cancelled; past `expires_at` it can only be resent (with a new token).
+ */
+export const staffInvitations = pgTable(
+  "staff_invitations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    schoolId: uuid("school_id")
+      .notNull()
+      .references(() => schools.id, { onDelete: "cascade" }),
+    departmentId: uuid("department_id").references(() => departments.id, { onDelete: "cascade" }),
+    /** Stored lower-case. */
+    email: text("email").notNull(),
+    displayName: text("display_name").notNull(),
+    role: staffRole("role").notNull(),
+    tokenHash: text("token_hash").notNull(),
+    invitedByStaffId: uuid("invited_by_staff_id").references(() => staff.id, { onDelete: "set null" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    /** When the mail server last took the message; null if it never has. */
+    lastSentAt: timestamp("last_sent_at", { withTimezone: true }),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    acceptedStaffId: uuid("accepted_staff_id").references(() => staff.id, { onDelete: "set null" }),
+    cancelledAt: timestamp("cancelled_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("staff_invitations_token_hash_key").on(t.tokenHash),
+    // One open invitation per address and school: a second would leave two live links.
+    uniqueIndex("staff_invitations_open_email_key")
+      .on(t.schoolId, t.email)
+      .where(sql`${t.acceptedAt} is null and ${t.cancelledAt} is null`),
+    index("staff_invitations_email_idx").on(t.email),
+  ],
+);
+
+/**
+ * One row per run of the retention purge. What a run deleted is counted in `purge_deletions`;
+ * the deleted data itself is never copied anywhere.
+ */
+export const purgeRuns = pgTable(
+  "purge_runs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** `schedule` (the timer), `start-up` (a missed run caught up) or `manual` (tests, scripts). */
+    trigger: text("trigger").$type<"schedule" | "start-up" | "manual">().notNull(),
+    startedAt: timestamp("started_at", { withTimezone: true }).notNull(),
+    finishedAt: timestamp("finished_at", { withTimezone: true }),
+    status: text("status").$type<"succeeded" | "failed">().notNull(),
+    /** For the server log only; never sent to a client. */
+    error: text("error"),
+  },
+  (t) => [index("purge_runs_started_idx").on(t.startedAt)],
+);
+
+/** How many rows of one kind a purge run deleted for one school, and by which cutoff. */
+export const purgeDeletions = pgTable(
+  "purge_deletions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    runId: uuid("run_id")
+      .notNull()
+      .references(() => purgeRuns.id, { onDelete: "cascade" }),
+    schoolId: uuid("school_id")
+      .notNull()
+      .references(() => schools.id, { onDelete: "cascade" }),
+    kind: text("kind").$type<PupilDataKind>().notNull(),
+    retention: retentionPeriod("retention").notNull(),
+    cutoff: timestamp("cutoff", { withTimezone: true }).notNull(),
+    deletedCount: integer("deleted_count").notNull(),
+  },
+  (t) => [index("purge_deletions_school_run_idx").on(t.schoolId, t.runId)],
 );
 
 /** Who did what to whom, for changes a school may need to account for. */

@@ -3,7 +3,7 @@
  * real SMTP (smtp-server) and keeps it as an .eml file so it can be read in development.
  */
 import { randomUUID } from "node:crypto";
-import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import type { AddressInfo } from "node:net";
 import { join } from "node:path";
 import { simpleParser } from "mailparser";
@@ -17,6 +17,32 @@ export interface CaughtMail {
   subject: string;
   text: string;
   html: string | null;
+}
+
+/** Parses one stored message; its id (the file name) starts with the time it arrived. */
+async function parse(id: string, raw: Buffer): Promise<CaughtMail> {
+  const parsed = await simpleParser(raw);
+  const to = [parsed.to].flat().flatMap((a) => a?.value.map((v) => v.address ?? "") ?? []);
+  return {
+    id,
+    receivedAt: new Date(Number(id.split("-")[0])).toISOString(),
+    from: parsed.from?.text ?? "",
+    to,
+    subject: parsed.subject ?? "",
+    text: parsed.text ?? "",
+    html: typeof parsed.html === "string" ? parsed.html : null,
+  };
+}
+
+/** The messages kept in `dir`, newest first, at most `limit` of them; none if the folder does not exist yet. */
+export async function readCapturedMail(dir: string, limit = Infinity): Promise<CaughtMail[]> {
+  if (!existsSync(dir)) return [];
+  const files = readdirSync(dir)
+    .filter((f) => f.endsWith(".eml"))
+    .sort()
+    .reverse()
+    .slice(0, limit);
+  return Promise.all(files.map((f) => parse(f.replace(/\.eml$/, ""), readFileSync(join(dir, f)))));
 }
 
 export function createMailCatcher(options: { dir: string; maxBytes?: number }) {
@@ -47,20 +73,6 @@ export function createMailCatcher(options: { dir: string; maxBytes?: number }) {
     },
   });
 
-  async function parse(id: string, raw: Buffer): Promise<CaughtMail> {
-    const parsed = await simpleParser(raw);
-    const to = [parsed.to].flat().flatMap((a) => a?.value.map((v) => v.address ?? "") ?? []);
-    return {
-      id,
-      receivedAt: new Date(Number(id.split("-")[0])).toISOString(),
-      from: parsed.from?.text ?? "",
-      to,
-      subject: parsed.subject ?? "",
-      text: parsed.text ?? "",
-      html: typeof parsed.html === "string" ? parsed.html : null,
-    };
-  }
-
   return {
     async listen(port: number, host = "127.0.0.1"): Promise<AddressInfo> {
       await new Promise<void>((resolve, reject) => {
@@ -71,10 +83,7 @@ export function createMailCatcher(options: { dir: string; maxBytes?: number }) {
     },
     close: () => new Promise<void>((resolve) => server.close(() => resolve())),
     /** Every message received so far, newest first. */
-    async messages(): Promise<CaughtMail[]> {
-      const files = readdirSync(options.dir).filter((f) => f.endsWith(".eml")).sort().reverse();
-      return Promise.all(files.map((f) => parse(f.replace(/\.eml$/, ""), readFileSync(join(options.dir, f)))));
-    },
+    messages: (): Promise<CaughtMail[]> => readCapturedMail(options.dir),
     /** Resolves with the next message that matches, or rejects after `timeoutMs`. */
     waitFor(match: (mail: CaughtMail) => boolean, timeoutMs = 5_000): Promise<CaughtMail> {
       return new Promise((resolve, reject) => {

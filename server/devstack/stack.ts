@@ -12,6 +12,7 @@ import { migrateDatabase } from "../db/migrate";
 import { DEMO_STAFF, DEMO_UNINVITED } from "../db/seed/demo-data";
 import { seedDemo } from "../db/seed/seed-demo";
 import { StopList } from "../lifecycle";
+import { createMailer } from "../mail/mailer";
 import { projectPath } from "../paths";
 import { STAFF_ROLE_LABELS } from "../contracts/staff-roles";
 import { createMailCatcher, type MailCatcher } from "./mail-catcher";
@@ -34,6 +35,8 @@ export interface StackOptions {
   clientDir: string | null;
   extraOrigins?: string[];
   sessionSecret?: string;
+  /** The sender of Linkleap's messages. */
+  mailFrom?: string;
   /** Stop PostgreSQL on stop() if this stack started it. */
   stopPostgresOnExit: boolean;
   log?: (line: string) => void;
@@ -105,8 +108,12 @@ export async function startStack(options: StackOptions, stops = new StopList()):
     stops.push(() => provider.close());
     const signInUrl = `http://127.0.0.1:${providerAddress.port}`;
 
+    const mailer = createMailer({ host: "127.0.0.1", port: smtpAddress.port, secure: false, from: options.mailFrom ?? "Linkleap <linkleap@localhost>" });
+    stops.push(async () => mailer.close());
+
     const server: LinkleapServer = createApp({
       database,
+      mailer,
       config: {
         publicUrl: provisionalUrl,
         demo: true,
@@ -114,6 +121,7 @@ export async function startStack(options: StackOptions, stops = new StopList()):
         oauth: { clientID: "linkleap-local", clientSecret, ...signInProviderEndpoints(signInUrl) },
         extraOrigins: options.extraOrigins,
         clientDir: options.clientDir,
+        mailDir: join(dataDir, "mail"),
       },
     });
     await server.listen(options.port, options.host);

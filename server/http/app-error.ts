@@ -9,6 +9,11 @@ const STATUS: Record<ErrorCode, number> = {
   not_found: 404,
   class_name_taken: 409,
   last_admin: 409,
+  already_staff: 409,
+  invitation_pending: 409,
+  invitation_closed: 409,
+  // The change was saved, but the mail server did not take the message.
+  mail_not_sent: 502,
   protocol_mismatch: 400,
   internal_error: 500,
 };

@@ -35,6 +35,12 @@ function actorQuery(db: Pick<Db, "select">) {
     .leftJoin(departments, eq(departments.id, staff.departmentId));
 }
 
+/** The staff member with this id as an actor, removed or not (inside a transaction that just changed them). */
+export async function actorWith(db: Pick<Db, "select">, id: string): Promise<Actor | undefined> {
+  const [row] = await actorQuery(db).where(eq(staff.id, id));
+  return row;
+}
+
 /** The current (not removed) staff member with this id, or undefined. */
 export async function findActorById(db: Db, id: string): Promise<Actor | undefined> {
   const [row] = await actorQuery(db).where(and(eq(staff.id, id), isNull(staff.removedAt)));

@@ -1,5 +1,6 @@
 /**
- * Every class, department and staff route against every kind of caller. Teacher A owns the
+ * Every class, department, staff, invitation, pupil-data and captured-mail route against every
+ * kind of caller. Teacher A owns the
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
  */
@@ -9,14 +10,14 @@ import { PEOPLE, seedFixture, type Fixture, type PersonKey } from "../support/fi
 import { HttpAgent, signIn } from "../support/http-agent";
 import { useTestStack } from "../support/test-stack";
 
-type Caller = "anonymous" | PersonKey;
+type Caller = "anonymous" | Exclude<PersonKey, "leaver">;
 const CALLERS: Caller[] = ["anonymous", "teacherA", "teacherB", "head", "otherHead", "elsewhere", "admin"];
 
 interface RouteCase {
   route: string;
-  method: "GET" | "POST" | "PATCH" | "PUT";
+  method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
   path: (f: Fixture) => string;
-  body?: (caller: Caller) => unknown;
+  body?: (caller: Caller, f: Fixture) => unknown;
   expected: Record<Caller, number>;
 }
 
@@ -38,6 +39,16 @@ const anyTeacher = (status: number): Record<Caller, number> => ({
   otherHead: status,
   elsewhere: status,
   admin: 403,
+});
+
+const adminOnly = (status: number): Record<Caller, number> => ({
+  anonymous: 401,
+  teacherA: 403,
+  teacherB: 403,
+  head: 403,
+  otherHead: 403,
+  elsewhere: 403,
+  admin: status,
 });
 
 const ROUTES: RouteCase[] = [
@@ -86,6 +97,56 @@ const ROUTES: RouteCase[] = [
     body: () => ({ role: "teacher" }),
     expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 403, otherHead: 403, elsewhere: 403, admin: 200 },
   },
+  { route: "DELETE /api/staff/:id", method: "DELETE", path: (f) => `/api/staff/${f.staffIds.leaver}`, expected: adminOnly(204) },
+  { route: "GET /api/invitations", method: "GET", path: () => "/api/invitations", expected: adminOnly(200) },
+  {
+    route: "POST /api/invitations",
+    method: "POST",
+    path: () => "/api/invitations",
+    body: (caller, f) => ({
+      displayName: `New colleague of ${caller}`,
+      email: `new.${caller.toLowerCase()}@northfen.example`,
+      role: "teacher",
+      departmentId: f.departmentId,
+    }),
+    expected: adminOnly(201),
+  },
+  {
+    route: "POST /api/invitations/:id/resend",
+    method: "POST",
+    path: (f) => `/api/invitations/${f.invitationId}/resend`,
+    expected: adminOnly(200),
+  },
+  { route: "DELETE /api/invitations/:id", method: "DELETE", path: (f) => `/api/invitations/${f.invitationId}`, expected: adminOnly(204) },
+  { route: "GET /api/school/departments", method: "GET", path: () => "/api/school/departments", expected: adminOnly(200) },
+  {
+    route: "GET /api/school/retention",
+    method: "GET",
+    path: () => "/api/school/retention",
+    expected: { anonymous: 401, teacherA: 200, teacherB: 200, head: 200, otherHead: 200, elsewhere: 200, admin: 200 },
+  },
+  {
+    route: "PUT /api/school/retention",
+    method: "PUT",
+    path: () => "/api/school/retention",
+    body: () => ({ period: "days_90" }),
+    expected: adminOnly(200),
+  },
+  { route: "GET /api/school/classes", method: "GET", path: () => "/api/school/classes", expected: adminOnly(200) },
+  {
+    route: "DELETE /api/classes/:id/pupil-data",
+    method: "DELETE",
+    path: (f) => `/api/classes/${f.classA}/pupil-data`,
+    // The class's teacher and the school admin; the head sees the class but may not delete.
+    expected: { ...ownerOnly(200), admin: 200 },
+  },
+  {
+    route: "GET /api/dev/mail",
+    method: "GET",
+    path: () => "/api/dev/mail",
+    // For anyone but an admin the page does not exist.
+    expected: { anonymous: 401, teacherA: 404, teacherB: 404, head: 404, otherHead: 404, elsewhere: 404, admin: 200 },
+  },
 ];
 
 const ctx = useTestStack(seedFixture);
@@ -102,7 +163,7 @@ beforeAll(async () => {
 describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
   it.each(CALLERS)("as %s", async (caller) => {
     const agent = agents.get(caller)!;
-    const { status, body: reply } = await agent.json<unknown>(path(ctx.fixture), { method, json: body?.(caller) });
+    const { status, body: reply } = await agent.json<unknown>(path(ctx.fixture), { method, json: body?.(caller, ctx.fixture) });
     expect(status).toBe(expected[caller]);
     if (status >= 400) {
       // Refusals carry an error code and nothing about the resource.

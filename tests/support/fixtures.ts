@@ -3,7 +3,8 @@
  * across a school boundary, and in the first school every role.
  */
 import type { Db } from "../../server/db/client";
-import { classes, departments, rosterEntries, schools, staff } from "../../server/db/schema";
+import { classes, departments, rosterEntries, schools, staff, staffInvitations } from "../../server/db/schema";
+import { hashToken } from "../../server/invitations/invitations.service";
 import type { StaffRole } from "../../server/contracts/staff-roles";
 
 export const PEOPLE = {
@@ -15,6 +16,8 @@ export const PEOPLE = {
   otherHead: { email: "eli.brook@northfen.example", name: "Eli Brook", role: "head_of_department" },
   /** A teacher at another school. */
   elsewhere: { email: "fay.lorne@southmere.example", name: "Fay Lorne", role: "teacher" },
+  /** A teacher whose access tests remove. */
+  leaver: { email: "hal.finch@northfen.example", name: "Hal Finch", role: "teacher" },
 } as const satisfies Record<string, { email: string; name: string; role: StaffRole }>;
 export type PersonKey = keyof typeof PEOPLE;
 
@@ -31,7 +34,13 @@ export interface Fixture {
   classB: string;
   /** A class at the other school. */
   classElsewhere: string;
+  /** The Mathematics department of the first school. */
+  mathsId: string;
+  /** An open invitation to the first school, sent by the admin (its link's token is FIXTURE_INVITATION_TOKEN). */
+  invitationId: string;
 }
+
+export const FIXTURE_INVITATION_TOKEN = "fixture-invitation-token-0123456789abcdef";
 
 export async function seedFixture(db: Db): Promise<Fixture> {
   const [school] = await db.insert(schools).values({ name: "Northfen School" }).returning();
@@ -47,6 +56,7 @@ export async function seedFixture(db: Db): Promise<Fixture> {
     admin: { schoolId: school!.id, departmentId: null },
     otherHead: { schoolId: school!.id, departmentId: maths!.id },
     elsewhere: { schoolId: other!.id, departmentId: otherScience!.id },
+    leaver: { schoolId: school!.id, departmentId: science!.id },
   };
   const staffIds = {} as Record<PersonKey, string>;
   for (const key of Object.keys(PEOPLE) as PersonKey[]) {
@@ -77,5 +87,27 @@ export async function seedFixture(db: Db): Promise<Fixture> {
   await db.insert(rosterEntries).values(
     ["Iris P.", "Jude K.", "Kofi M."].map((displayName, position) => ({ classId: classA, displayName, position })),
   );
-  return { schoolId: school!.id, departmentId: science!.id, staffIds, classA, classB, classElsewhere };
+  const [invitation] = await db
+    .insert(staffInvitations)
+    .values({
+      schoolId: school!.id,
+      departmentId: science!.id,
+      email: "ivo.penn@northfen.example",
+      displayName: "Ivo Penn",
+      role: "teacher",
+      tokenHash: hashToken(FIXTURE_INVITATION_TOKEN),
+      invitedByStaffId: staffIds.admin,
+      expiresAt: new Date(Date.now() + 14 * 24 * 60 * 60 * 1000),
+    })
+    .returning({ id: staffInvitations.id });
+  return {
+    schoolId: school!.id,
+    departmentId: science!.id,
+    mathsId: maths!.id,
+    staffIds,
+    classA,
+    classB,
+    classElsewhere,
+    invitationId: invitation!.id,
+  };
 }

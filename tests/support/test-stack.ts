@@ -1,10 +1,16 @@
+import { randomBytes } from "node:crypto";
+import { rmSync } from "node:fs";
 import { createServer } from "node:net";
+import { join } from "node:path";
 import { afterAll, beforeAll } from "vitest";
 import { createApp, type LinkleapServer } from "../../server/app";
 import type { Database, Db } from "../../server/db/client";
 import { createTestDatabase, type TestDatabase } from "./test-database";
 import { createSignInProvider, signInProviderEndpoints, type ProviderAccount, type SignInProvider } from "../../server/devstack/sign-in-provider";
+import { createMailCatcher, type MailCatcher } from "../../server/devstack/mail-catcher";
+import { createMailer } from "../../server/mail/mailer";
 import { OUTSIDER, PEOPLE } from "./fixtures";
+import { TEST_DATA_DIR } from "./paths";
 
 export const TEST_SESSION_SECRET = "test-secret-that-is-long-enough-for-the-schema-1234";
 
@@ -27,6 +33,8 @@ export interface TestStack {
   providerUrl: string;
   server: LinkleapServer;
   provider: SignInProvider;
+  /** The local SMTP server this app sends through; its folder is the app's captured mail. */
+  mail: MailCatcher;
   /** Stops the app (not the provider) so a test can start another on the same port and database. */
   restartApp(): Promise<void>;
   close(): Promise<void>;
@@ -42,6 +50,12 @@ export interface TestStackOptions {
   /** The built client to serve. */
   clientDir?: string | null;
   accounts?: ProviderAccount[];
+  /** Demo mode (the default) or production mode, as LINKLEAP_MODE chooses. */
+  demo?: boolean;
+  /** The purge's cron pattern; off by default, so tests run the purge themselves. */
+  purgeSchedule?: string | null;
+  /** SMTP port to send through instead of the stack's own local server (e.g. one nobody listens on). */
+  smtpPort?: number;
 }
 
 export async function startTestStack(database: Database, options: TestStackOptions = {}): Promise<TestStack> {
@@ -56,13 +70,25 @@ export async function startTestStack(database: Database, options: TestStackOptio
   });
   const providerAddress = await provider.listen(0);
   const providerUrl = `http://127.0.0.1:${providerAddress.port}`;
+  const mailDir = join(TEST_DATA_DIR, "mail", randomBytes(5).toString("hex"));
+  const mail = createMailCatcher({ dir: mailDir });
+  const smtp = await mail.listen(0);
+  const mailer = createMailer({
+    host: "127.0.0.1",
+    port: options.smtpPort ?? smtp.port,
+    secure: false,
+    from: "Linkleap <linkleap@northfen.example>",
+  });
 
   const makeApp = () =>
     createApp({
       database,
+      mailer,
       config: {
         publicUrl: url,
-        demo: true,
+        demo: options.demo ?? true,
+        mailDir,
+        purgeSchedule: options.purgeSchedule ?? null,
         sessionSecret: TEST_SESSION_SECRET,
         oauth: { clientID: "linkleap-test", clientSecret: "test-client-secret", ...signInProviderEndpoints(providerUrl) },
         clientDir,
@@ -76,6 +102,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
     port,
     providerUrl,
     provider,
+    mail,
     server: makeApp(),
     async restartApp() {
       await stack.server.close();
@@ -85,6 +112,9 @@ export async function startTestStack(database: Database, options: TestStackOptio
     async close() {
       await stack.server.close();
       await provider.close();
+      mailer.close();
+      await mail.close();
+      rmSync(mailDir, { recursive: true, force: true });
     },
   };
   await stack.server.listen(port);

@@ -10,20 +10,25 @@ interface NavItem {
   label: string;
   roles: readonly StaffRole[];
   end?: boolean;
+  /** Only in the demo (the captured mail). */
+  demoOnly?: boolean;
 }
 
-/** Links by role: teachers and heads teach classes; heads also see the department; admins manage staff. */
+/** Links by role: teachers and heads teach classes; heads also see the department; admins manage staff and pupil data. */
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: "/", label: "Home", roles: ["teacher", "head_of_department"], end: true },
   { to: "/classes", label: "Classes", roles: ["teacher", "head_of_department"] },
   { to: "/department", label: "Department", roles: ["head_of_department"] },
   { to: "/staff", label: "Staff", roles: ["admin"] },
+  { to: "/pupil-data", label: "Pupil data", roles: ["admin"] },
+  { to: "/captured-mail", label: "Captured mail", roles: ["admin"], demoOnly: true },
 ];
 
-export const navItemsFor = (role: StaffRole) => NAV_ITEMS.filter((item) => item.roles.includes(role));
+export const navItemsFor = (role: StaffRole, demo = false) =>
+  NAV_ITEMS.filter((item) => item.roles.includes(role) && (demo || !item.demoOnly));
 
-export function AppHeader({ me }: { me: Me }) {
-  const items = navItemsFor(me.role);
+export function AppHeader({ me, demo = false }: { me: Me; demo?: boolean }) {
+  const items = navItemsFor(me.role, demo);
   return (
     <header className="border-b border-line bg-surface">
       <div className="mx-auto flex max-w-page flex-wrap items-center gap-x-6 gap-y-1 px-4 py-2 sm:px-6">

@@ -1,4 +1,4 @@
-import { Navigate, Outlet, useLocation } from "react-router";
+import { Link, Navigate, Outlet, useLocation } from "react-router";
 import { ErrorState } from "@/components/ui/error-state";
 import { LoadingState } from "@/components/ui/spinner";
 import { useSession } from "@/features/auth/api/get-session";
@@ -42,12 +42,15 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-dvh flex-col">
-      <AppHeader me={me} />
+      <AppHeader me={me} demo={session.data.demo} />
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-page flex-1 px-4 py-6 focus:outline-none sm:px-6 sm:py-10">
         <Outlet />
       </main>
-      <footer className="border-t border-line px-4 py-4 text-center text-sm text-ink-muted">
-        Linkleap · {me.school.name}
+      <footer className="border-t border-line px-4 py-2 text-center text-sm text-ink-muted">
+        Linkleap · {me.school.name} ·{" "}
+        <Link to="/privacy" className="inline-flex min-h-touch items-center px-1 text-accent">
+          Pupil data and privacy
+        </Link>
       </footer>
     </div>
   );

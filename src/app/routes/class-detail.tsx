@@ -1,5 +1,6 @@
 import { useState } from "react";
-import { useParams } from "react-router";
+import { useQueryClient } from "@tanstack/react-query";
+import { Link, useParams } from "react-router";
 import type { ClassSummary } from "@contracts/classes";
 import { Badge } from "@/components/ui/badge";
 import { ButtonLink } from "@/components/ui/button";
@@ -7,12 +8,15 @@ import { ErrorState } from "@/components/ui/error-state";
 import { ArchiveIcon, ArrowLeftIcon, LockIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
+import { Section } from "@/components/ui/section";
 import { SkeletonList } from "@/components/ui/skeleton";
 import { UnsavedChangesDialog } from "@/components/ui/unsaved-changes-dialog";
+import { classKeys } from "@/features/classes/api/class-keys";
 import { useClass } from "@/features/classes/api/get-class";
 import { ArchiveClassSection } from "@/features/classes/components/archive-class-section";
 import { ClassDetailsSection } from "@/features/classes/components/class-details-section";
 import { RosterSection } from "@/features/classes/components/roster-section";
+import { DeletePupilDataButton } from "@/features/pupil-data/components/delete-pupil-data-button";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { useUnsavedChanges } from "@/hooks/use-unsaved-changes";
 import { isApiError } from "@/lib/api-client";
@@ -110,8 +114,33 @@ function ClassView({ item }: { item: ClassSummary }) {
         <ClassDetailsSection item={item} onDirtyChange={setDetailsDirty} />
         <RosterSection item={item} onDirtyChange={setRosterDirty} />
         {readOnly ? null : <ArchiveClassSection item={item} />}
+        {readOnly ? null : <PupilDataSection item={item} />}
       </div>
       <UnsavedChangesDialog blocker={blocker} />
     </>
+  );
+}
+
+/** The owner's "delete this class's pupil data now"; the roster on this page refreshes after. */
+function PupilDataSection({ item }: { item: ClassSummary }) {
+  const queryClient = useQueryClient();
+  return (
+    <Section
+      tone="danger"
+      title="Pupil data"
+      description={
+        <>
+          Pupil data is deleted automatically once the school’s retention period has passed. You can delete this class’s now,
+          for example when a class has left. <Link to="/privacy">What is stored, and for how long</Link>.
+        </>
+      }
+    >
+      <DeletePupilDataButton
+        classId={item.id}
+        className={item.name}
+        rosterCount={item.rosterCount}
+        onDeleted={() => void queryClient.invalidateQueries({ queryKey: classKeys.detail(item.id) })}
+      />
+    </Section>
   );
 }

@@ -13,6 +13,7 @@ import { useClasses } from "@/features/classes/api/get-classes";
 import { ClassList } from "@/features/classes/components/class-list";
 import { NewClassAction } from "@/features/classes/components/create-class-dialog";
 import { DepartmentShortcut } from "@/features/home/components/department-shortcut";
+import { Guides } from "@/features/home/components/guides";
 import { RecentLessons } from "@/features/home/components/recent-lessons";
 import { firstNameOf, greetingFor } from "@/features/home/utils/greeting";
 import { useDocumentTitle } from "@/hooks/use-document-title";
@@ -75,6 +76,7 @@ function TeacherHome() {
         <div className="grid content-start gap-6">
           <RecentLessons />
           {me.role === "head_of_department" ? <DepartmentShortcut departmentName={me.department?.name ?? null} /> : null}
+          <Guides />
         </div>
       </div>
     </>

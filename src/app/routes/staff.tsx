@@ -5,6 +5,8 @@ import { PageHeader } from "@/components/ui/page-header";
 import { Section } from "@/components/ui/section";
 import { SkeletonList } from "@/components/ui/skeleton";
 import { useStaff } from "@/features/staff/api/get-staff";
+import { InvitationList } from "@/features/staff/components/invitation-list";
+import { InviteStaffForm } from "@/features/staff/components/invite-staff-form";
 import { StaffTable } from "@/features/staff/components/staff-table";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { RequireRole } from "../layouts/require-role";
@@ -13,7 +15,7 @@ import { useMe } from "../use-me";
 const ROLE_NOTES = [
   { role: "Teacher", does: "Creates classes and keeps their rosters." },
   { role: "Head of department", does: "Everything a teacher does, and looks at every class in their department without changing it." },
-  { role: "School admin", does: "Manages staff roles. Does not teach classes in Linkleap." },
+  { role: "School admin", does: "Invites staff, manages roles and access, and looks after pupil data. Does not teach classes in Linkleap." },
 ] as const;
 
 export function Component() {
@@ -33,9 +35,15 @@ function StaffPage() {
       <PageHeader
         eyebrow={me.school.name}
         title="Staff"
-        description="Who can sign in to Linkleap, and what each person can do. Change a role, then save it on that row."
+        description="Who can sign in to Linkleap, and what each person can do. Invite colleagues, change a role and save it on that row, or remove someone’s access."
       />
       <div className="grid gap-6">
+        <Section title="Invite a member of staff" description="They get an e-mail with a link; signing in with that address puts them on the list below.">
+          <InviteStaffForm />
+        </Section>
+        <Section title="Invitations waiting">
+          <InvitationList />
+        </Section>
         <Section title="Staff and roles">
           {staff.isPending ? (
             <SkeletonList rows={4} label="Loading the staff list…" />
@@ -56,7 +64,6 @@ function StaffPage() {
               </div>
             ))}
           </dl>
-          <p className="mt-4 border-t border-line pt-4 text-sm text-ink-muted">Inviting new staff cannot be done from this page yet.</p>
         </Section>
       </div>
     </>

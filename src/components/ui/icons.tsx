@@ -173,3 +173,11 @@ export const ClockIcon = (p: IconProps) => (
     <path d="M12 7v5l3 2" />
   </Icon>
 );
+
+/** A file with an arrow going up: choosing a file to upload. */
+export const UploadIcon = (p: IconProps) => (
+  <Icon {...p}>
+    <path d="M14 3H7a2 2 0 0 0-2 2v14a2 2 0 0 0 2 2h10a2 2 0 0 0 2-2V8Z" />
+    <path d="M14 3v5h5M12 17v-6M9.5 13.5 12 11l2.5 2.5" />
+  </Icon>
+);

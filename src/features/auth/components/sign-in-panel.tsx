@@ -11,6 +11,13 @@ const NOTICE_TEXT = {
   sign_in_failed: "Sign-in did not work this time. Please try again; if it keeps failing, ask your school admin.",
 } as const;
 
+const INVITATION_CLOSED_TEXT = {
+  used: "This invitation has already been used. If it was you, just sign in with your school account.",
+  cancelled: "This invitation was cancelled. Ask your school admin if you should still have access.",
+  expired: "This invitation has run out. Ask your school admin to send you a new one.",
+  unknown: "This invitation link does not work: it may have been replaced by a newer one. Use the link in the latest e-mail, or ask your school admin to send it again.",
+} as const;
+
 /**
  * The one way in: a big link to the school's sign-in. Shows why the person is here
  * (signed out elsewhere, sign-in cancelled…) and, in the demo, how the local sign-in works.
@@ -49,6 +56,19 @@ export function SignInPanel({ session, sessionError, onRetrySession, retrying, r
             <p>
               You signed in as <strong className="break-all">{notice.email}</strong>, which is not on your school’s staff list.
               Ask your head of department or school admin to invite you, or sign in with another account.
+            </p>
+          </Notice>
+        ) : null}
+        {notice?.kind === "invitation_closed" ? (
+          <Notice tone="warn" title="This invitation cannot be used">
+            <p>{INVITATION_CLOSED_TEXT[notice.reason]}</p>
+          </Notice>
+        ) : null}
+        {notice?.kind === "invitation_other_account" ? (
+          <Notice tone="warn" title="Sign in with the invited address">
+            <p>
+              You signed in as <strong className="break-all">{notice.email}</strong>, but the invitation was sent to another
+              address. Open the link in the e-mail again and sign in with the address it was sent to.
             </p>
           </Notice>
         ) : null}

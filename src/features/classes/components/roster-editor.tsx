@@ -8,6 +8,7 @@ import { useFocusFirstError } from "@/hooks/use-focus-first-error";
 import { errorMessage, isApiError } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
 import { useReplaceRoster } from "../api/replace-roster";
+import { RosterCsvUpload } from "./roster-csv-panel";
 import {
   newRowKey,
   placeServerErrors,
@@ -104,6 +105,26 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
     setPasteOpen(false);
     setStatus(`Added ${plural(names.length, "name", "names")}. Check them, then save the roster.`);
     if (added[0]) focusOnMount.current = added[0].key;
+  };
+
+  const savedFromFile = (savedRoster: Roster) => {
+    setRows(rowsFromNames(savedRoster.names.map((n) => n.displayName)));
+    setTouched(new Set());
+    setSubmitted(false);
+    setServerRowErrors(new Map());
+    setServerFormErrors([]);
+    setPasteOpen(false);
+    setStatus(`Roster saved from the file: ${plural(savedRoster.names.length, "name", "names")}.`);
+  };
+
+  const loadFromFile = (names: string[]) => {
+    const loaded = rowsFromNames(names);
+    setRows(loaded);
+    // Checked at once, like pasted names, so the rows that need fixing are marked.
+    setTouched(new Set(loaded.map((r) => r.key)));
+    setPasteOpen(false);
+    setStatus(`Put ${plural(names.length, "name", "names")} from the file in the list. Fix any marked, then save the roster.`);
+    if (loaded[0]) focusOnMount.current = loaded[0].key;
   };
 
   const discard = () => {
@@ -251,6 +272,7 @@ export function RosterEditor({ classId, roster, onDirtyChange }: {
         >
           Paste several names
         </Button>
+        <RosterCsvUpload classId={classId} onSaved={savedFromFile} onLoadIntoList={loadFromFile} />
       </div>
 
       {pasteOpen ? <PastePanel id={`${baseId}-paste`} onAdd={addPasted} onCancel={() => setPasteOpen(false)} /> : null}

@@ -10,6 +10,8 @@ export const staffQueryOptions = () =>
   queryOptions({
     queryKey: staffKeys.lists(),
     queryFn: ({ signal }) => getStaff(signal),
+    // People join by accepting invitations elsewhere: check again whenever the page is shown.
+    staleTime: 0,
   });
 
 export const useStaff = () => useQuery(staffQueryOptions());

@@ -2,11 +2,14 @@ import { useId, useState, type FormEvent } from "react";
 import type { StaffMember } from "@contracts/staff";
 import type { StaffRole } from "@contracts/staff-roles";
 import { Button } from "@/components/ui/button";
+import { ConfirmDialog } from "@/components/ui/dialog";
+import { Notice } from "@/components/ui/notice";
 import { CONTROL_CLASSES, FieldError } from "@/components/ui/field";
-import { CheckCircleIcon, WarnIcon } from "@/components/ui/icons";
+import { CheckCircleIcon, RemoveIcon, WarnIcon } from "@/components/ui/icons";
 import { isApiError, errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
 import { STAFF_ROLE_LABELS } from "@contracts/staff-roles";
+import { useRemoveStaff } from "../api/remove-staff";
 import { useUpdateStaffRole } from "../api/update-staff-role";
 
 const ROLE_ORDER: readonly StaffRole[] = ["teacher", "head_of_department", "admin"];
@@ -137,7 +140,54 @@ function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean
           </div>
           <div role="alert">{message?.tone === "danger" ? <FieldError id={`${id}-message`}>{message.text}</FieldError> : null}</div>
         </form>
+        {isViewer ? null : <RemoveAccess member={member} />}
       </td>
     </tr>
+  );
+}
+
+/** Removes a person's access after asking; they are signed out everywhere at once. */
+function RemoveAccess({ member }: { member: StaffMember }) {
+  const [confirming, setConfirming] = useState(false);
+  const remove = useRemoveStaff();
+  return (
+    <>
+      <Button
+        variant="quiet"
+        className="mt-2 -ml-3 text-danger hover:bg-danger-soft"
+        icon={<RemoveIcon />}
+        aria-label={`Remove access for ${member.displayName}`}
+        onClick={() => {
+          remove.reset();
+          setConfirming(true);
+        }}
+      >
+        Remove access
+      </Button>
+      <ConfirmDialog
+        open={confirming}
+        onCancel={() => setConfirming(false)}
+        onConfirm={() => {
+          if (remove.isPending) return;
+          remove.mutate(member.id, { onSuccess: () => setConfirming(false) });
+        }}
+        busy={remove.isPending}
+        tone="danger"
+        title={`Remove ${member.displayName}’s access?`}
+        confirmLabel="Remove access"
+        error={
+          remove.error ? (
+            <Notice tone="danger" live="alert">
+              <p>{errorMessage(remove.error)}</p>
+            </Notice>
+          ) : null
+        }
+      >
+        <p>
+          {member.displayName} is signed out on every device straight away and can no longer sign in. Their classes stay with
+          the school. To let them back, invite {member.email} again.
+        </p>
+      </ConfirmDialog>
+    </>
   );
 }
