@@ -12,3 +12,5 @@ export const RIGS = {
   scale: scaleRig,
   folded: foldedRig,
 } satisfies Partial<Record<RigId, RigDefinition>>;
+
+export const RIG_LIST: RigDefinition[] = Object.values(RIGS);
