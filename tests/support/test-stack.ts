@@ -14,17 +14,26 @@ import { TEST_DATA_DIR } from "./paths";
 
 export const TEST_SESSION_SECRET = "test-secret-that-is-long-enough-for-the-schema-1234";
 
+/** Ports already handed out in this process: the OS may offer a just-closed port again. */
+const handedOut = new Set<number>();
+
 /** A port nobody is using right now (the app must know its own address before it listens). */
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.unref();
-    server.on("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
+export async function freePort(): Promise<number> {
+  for (;;) {
+    const port = await new Promise<number>((resolve, reject) => {
+      const server = createServer();
+      server.unref();
+      server.on("error", reject);
+      server.listen(0, "127.0.0.1", () => {
+        const { port } = server.address() as { port: number };
+        server.close(() => resolve(port));
+      });
     });
-  });
+    if (!handedOut.has(port)) {
+      handedOut.add(port);
+      return port;
+    }
+  }
 }
 
 export interface TestStack {
@@ -60,12 +69,12 @@ export interface TestStackOptions {
 
 export async function startTestStack(database: Database, options: TestStackOptions = {}): Promise<TestStack> {
   const clientDir = options.clientDir ?? null;
-  const port = await freePort();
-  const url = `http://127.0.0.1:${port}`;
+  // The app's address is only known once it listens; the provider reads this list per request.
+  const redirectUris: string[] = [];
   const provider = createSignInProvider({
     clientId: "linkleap-test",
     clientSecret: "test-client-secret",
-    redirectUris: [`${url}/auth/google/callback`],
+    redirectUris,
     accounts: options.accounts ?? defaultAccounts,
   });
   const providerAddress = await provider.listen(0);
@@ -80,6 +89,8 @@ export async function startTestStack(database: Database, options: TestStackOptio
     from: "Linkleap <linkleap@northfen.example>",
   });
 
+  let port = 0;
+  let url = "";
   const makeApp = () =>
     createApp({
       database,
@@ -97,13 +108,29 @@ export async function startTestStack(database: Database, options: TestStackOptio
       log: () => {},
     });
 
+  // A port found free can be taken by another test worker before we listen on it: try again.
+  let server: ReturnType<typeof makeApp> | null = null;
+  for (let attempt = 1; server === null; attempt++) {
+    port = await freePort();
+    url = `http://127.0.0.1:${port}`;
+    redirectUris.splice(0, redirectUris.length, `${url}/auth/google/callback`);
+    const candidate = makeApp();
+    try {
+      await candidate.listen(port);
+      server = candidate;
+    } catch (error) {
+      // The candidate never listened and holds nothing open (no purge schedule in tests): drop it.
+      if ((error as NodeJS.ErrnoException).code !== "EADDRINUSE" || attempt >= 5) throw error;
+    }
+  }
+
   const stack: TestStack = {
     url,
     port,
     providerUrl,
     provider,
     mail,
-    server: makeApp(),
+    server,
     async restartApp() {
       await stack.server.close();
       stack.server = makeApp();
@@ -117,7 +144,6 @@ export async function startTestStack(database: Database, options: TestStackOptio
       rmSync(mailDir, { recursive: true, force: true });
     },
   };
-  await stack.server.listen(port);
   return stack;
 }
 
