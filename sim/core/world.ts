@@ -77,6 +77,9 @@ export class World {
   private readonly pairs = Pairs.create({});
   private readonly sorted: MBody[] = [];
   private sortedDirty = true;
+  /** Joints with at least one end in the world: the only ones a step needs to visit. */
+  private activeJoints: PinJoint[] = [];
+  private jointsDirty = true;
   private readonly collisions: Matter.Collision[] = [];
 
   constructor(settings: WorldSettings) {
@@ -87,11 +90,13 @@ export class World {
     tagOf(body).parked = false;
     this.dynamic.push(body);
     this.sortedDirty = true;
+    this.jointsDirty = true;
   }
 
   addStatic(body: MBody) {
     this.statics.push(body);
     this.sortedDirty = true;
+    this.jointsDirty = true;
   }
 
   /** Take a body out of the step; joints to it then hold it fixed (or are disabled by the rig). */
@@ -99,6 +104,7 @@ export class World {
     removeFrom(this.dynamic, body) || removeFrom(this.statics, body);
     tagOf(body).parked = true;
     this.sortedDirty = true;
+    this.jointsDirty = true;
   }
 
   isActive(body: MBody) {
@@ -110,6 +116,7 @@ export class World {
     if (b) this.register(b);
     const joint: PinJoint = { a, aOffset, b, bOffset, px, py, cx: 0, cy: 0, totalX: 0, totalY: 0, enabled: true };
     this.joints.push(joint);
+    this.jointsDirty = true;
     return joint;
   }
 
@@ -120,7 +127,8 @@ export class World {
     this.time += dt;
     this.steps += 1;
 
-    for (const joint of this.joints) {
+    if (this.jointsDirty) this.collectActiveJoints();
+    for (const joint of this.activeJoints) {
       joint.cx = 0;
       joint.cy = 0;
     }
@@ -156,6 +164,23 @@ export class World {
     }
   }
 
+  /** Release a joint for good (e.g. a link left lying on the floor lets go of the moving chain). */
+  releaseJoint(joint: PinJoint) {
+    joint.enabled = false;
+    this.jointsDirty = true;
+  }
+
+  private collectActiveJoints() {
+    const inWorld = (body: MBody | null) => body !== null && !tagOf(body).parked;
+    this.activeJoints = this.joints.filter((joint) => joint.enabled && (inWorld(joint.a) || inWorld(joint.b) || joint.b === null));
+    // A joint that drops out gave no impulse this step: clear what its last step left.
+    for (const joint of this.joints) {
+      joint.cx = 0;
+      joint.cy = 0;
+    }
+    this.jointsDirty = false;
+  }
+
   /** Joint force (N) of the last step: corrections spread over the step. */
   jointForce(joint: PinJoint) {
     const dt = this.settings.dt;
@@ -183,7 +208,7 @@ export class World {
    * the inner loop has no trigonometry.
    */
   private solveJoints(iterations: number) {
-    const joints = this.joints;
+    const joints = this.activeJoints;
     const pass = ++this.pass;
     const touched = this.touched;
     touched.length = 0;

@@ -227,7 +227,7 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
       while (parkedOnFloor < landed - KEPT_ON_FLOOR) {
         world.park(bodies[parkedOnFloor]!);
         const joint = chain.joints[parkedOnFloor];
-        if (joint) joint.enabled = false;
+        if (joint) world.releaseJoint(joint);
         parkedOnFloor++;
       }
     };
