@@ -39,6 +39,13 @@ export interface WorldSettings {
   jointIterations: number;
   positionIterations: number;
   velocityIterations: number;
+  /**
+   * Take each joint's lever arms (how a correction turns a body) from the body's angle at the
+   * start of the step instead of its predicted angle. A fast-turning link then loses about ten
+   * times less energy: a 30-link chain swinging down from level lost 3.7 % of mgL/2 in its
+   * first second at 0.25 ms with predicted angles, 0.4 % with these (world.test.ts).
+   */
+  leverFromStepStart?: boolean;
 }
 
 /** What bodies may touch: links carry their index along the chain in plugin.link. */
@@ -133,6 +140,16 @@ export class World {
       joint.cy = 0;
     }
 
+    if (this.settings.leverFromStepStart) {
+      for (let i = 0; i < dynamic.length; i++) {
+        const body = dynamic[i]!;
+        const slot = tagOf(body).slot;
+        if (slot !== undefined) {
+          this.startCos[slot] = Math.cos(body.angle);
+          this.startSin[slot] = Math.sin(body.angle);
+        }
+      }
+    }
     // Gravity and Verlet integration (matter's own Body.update; frictionAir is 0 on links).
     for (let i = 0; i < dynamic.length; i++) {
       const body = dynamic[i]!;
@@ -209,6 +226,7 @@ export class World {
    */
   private solveJoints(iterations: number) {
     const joints = this.activeJoints;
+    const lever = this.settings.leverFromStepStart === true;
     const pass = ++this.pass;
     const touched = this.touched;
     touched.length = 0;
@@ -262,8 +280,16 @@ export class World {
         if (gap < 1e-12) continue;
         const nx = dx / gap;
         const ny = dy / gap;
-        const raCrossN = rax * ny - ray * nx;
-        const rbCrossN = rbx * ny - rby * nx;
+        let raCrossN = rax * ny - ray * nx;
+        let rbCrossN = rbx * ny - rby * nx;
+        if (lever) {
+          const slotA = sa / 5;
+          raCrossN = (this.startCos[slotA]! * ny - this.startSin[slotA]! * nx) * joint.aOffset;
+          if (b !== null) {
+            const slotB = sb / 5;
+            rbCrossN = (this.startCos[slotB]! * ny - this.startSin[slotB]! * nx) * joint.bOffset;
+          }
+        }
         const wa = aFixed ? 0 : a.inverseMass + a.inverseInertia * raCrossN * raCrossN;
         const wb = bFixed ? 0 : b!.inverseMass + b!.inverseInertia * rbCrossN * rbCrossN;
         const lambda = gap / (wa + wb);
@@ -323,6 +349,12 @@ export class World {
     const scratch = new Float64Array(capacity * 5);
     scratch.set(this.scratch);
     this.scratch = scratch;
+    const startCos = new Float64Array(capacity);
+    startCos.set(this.startCos);
+    this.startCos = startCos;
+    const startSin = new Float64Array(capacity);
+    startSin.set(this.startSin);
+    this.startSin = startSin;
   }
 
   private pass = 0;
@@ -330,6 +362,8 @@ export class World {
   private passOf = new Int32Array(0);
   /** Per body slot: axis cos, axis sin, x, y and angle at the start of the pass. */
   private scratch = new Float64Array(0);
+  private startCos = new Float64Array(0);
+  private startSin = new Float64Array(0);
   private readonly touched: MBody[] = [];
   private readonly shift = { x: 0, y: 0 };
 

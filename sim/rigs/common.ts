@@ -16,6 +16,11 @@ export const SHIPPED_DT = 0.00025;
 
 export const stepSchema = describedNumber("Time step", "s", 0.00003125, 0.001, SHIPPED_DT);
 
+/**
+ * Solver settings shared by the rigs: predicted-angle lever arms, the solve the fountain, heap
+ * and scale were checked with. The folded drop, whose links flip over fast in the bend, takes
+ * its lever arms from the start of the step instead (World.settings.leverFromStepStart).
+ */
 export const worldSettingsFor = (dt: number, overrides: Partial<WorldSettings> = {}): WorldSettings => ({
   dt: ms(dt),
   jointIterations: 2,

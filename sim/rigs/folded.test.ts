@@ -36,12 +36,17 @@ describe("folded chain rig", () => {
     expect(Math.abs(measured.accelRatio!.value / theory.accelRatio! - 1)).toBeLessThan(0.1);
   }, 30_000);
 
-  it("comes closer to the energy-conserving chain at a quarter of the step (the shortfall is the solver's loss)", () => {
+  it("does not depend on the step, and the predicted-angle joint solve falls short where links flip over", () => {
     const { measured, theory } = shippedRun();
     const fine = runTrial(RIGS.folded, { dt: 0.0000625 }, { frameRate: 0 }).measured;
-    const gap = (m: typeof measured, key: "speedRatio" | "accelRatio") => Math.abs(m[key]!.value / theory[key]! - 1);
-    expect(gap(fine, "speedRatio")).toBeLessThan(gap(measured, "speedRatio"));
-    expect(gap(fine, "accelRatio")).toBeLessThan(gap(measured, "accelRatio"));
+    const predicted = runTrial(RIGS.folded, { leverFromStepStart: false }, { frameRate: 0 }).measured;
+    const error = (m: typeof measured, key: "speedRatio" | "accelRatio") => m[key]!.value / theory[key]! - 1;
+    for (const key of ["speedRatio", "accelRatio"] as const) {
+      // Converged: a quarter of the step changes the result by under 1 %.
+      expect(Math.abs(error(fine, key) - error(measured, key))).toBeLessThan(0.01);
+    }
+    // Energy lost in the fast-turning links of the bend shows as a shortfall (sim/core/world.test.ts).
+    expect(error(predicted, "accelRatio")).toBeLessThan(-Math.abs(error(measured, "accelRatio")));
   }, 30_000);
 
   it("stops when the free end has fallen 0.8 L, before the formula runs away", () => {

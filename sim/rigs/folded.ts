@@ -1,4 +1,4 @@
-import type { z } from "zod";
+import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
 import { chainSchema, elementPattern, type ElementSpec, jointIterationsFor } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
@@ -12,6 +12,12 @@ import type { RigDefinition, SceneShape } from "./rig";
 export const foldedSchema = chainSchema.extend({
   chainLength: describedNumber("Chain length", "m", 0.3, 3, 1),
   dt: stepSchema,
+  /**
+   * Joint lever arms from the start of each step (default): links flip over fast in the bend,
+   * and the predicted-angle solve loses energy there (sim/core/world.test.ts). Off only to
+   * show that loss.
+   */
+  leverFromStepStart: z.boolean().default(true),
 });
 export type FoldedParams = z.output<typeof foldedSchema>;
 
@@ -31,14 +37,12 @@ export const FOLDED_SPEED_AT = 0.5;
 export const FOLDED_ACCEL_BAND: [number, number] = [0.4, 0.6];
 /**
  * The bend across the bottom is this share of the chain's length wide (so the U has the same
- * proportions at every length), and the arms at least three link thicknesses apart. Neither
- * narrower nor wider, for two reasons found by trial (1 m rod chain, 20 mm links):
- * - in a fold narrower than a link, each link flips over in a fraction of its passage and the
- *   position-based joint solve loses energy in fast-turning links (sim-notes, "The height does
- *   not converge"): with a one-link bend the free end ran 6 % (v²) and 13 % (a) below the
- *   energy-conserving values at the shipped 0.25 ms step, 3 % and 6 % at 0.0625 ms;
- * - the formula is for a U with no width: a bend of 20 % of the chain ran 7–10 % above it.
- * With 5 %: 1 % (v²) and 3 % (a) below at 0.25 ms, under 0.5 % at 0.0625 ms.
+ * proportions at every length), and the arms at least three link thicknesses apart. Found by
+ * trial (1 m rod chain, 20 mm links, 0.25 ms): the formula is for a U with no width, and a
+ * bend of 20 % of the chain ran 7–10 % above it; with 5 % the free end comes within 0.3 % (v²)
+ * and 1.1 % (a) of it, the same at a quarter of the step. A bend three thicknesses wide reads
+ * 2.6 % low on v². With predicted-angle lever arms the links flipping over in the bend lose
+ * energy (sim-notes, "The height does not converge"): 1.1 % and 3.3 % low at 0.25 ms.
  */
 const BEND_SHARE = 0.05;
 const ARM_GAP_THICKNESSES = 3;
@@ -50,7 +54,7 @@ export const foldedRig: RigDefinition<typeof foldedSchema> = {
   schema: foldedSchema,
   headline: { key: "accelRatio", label: "Free end's acceleration ÷ g (x from 0.4 L to 0.6 L)", unit: "" },
   create(params) {
-    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params) });
+    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params), leverFromStepStart: params.leverFromStepStart });
     const pattern = elementPattern(params);
     const pitch = pattern.reduce((s, e) => s + e.pitch, 0);
     const thickness = Math.max(...pattern.map((e) => e.thickness));
