@@ -25,6 +25,8 @@ export function helpText(): string {
       if (meta) {
         const unit = meta.unit ? ` ${meta.unit}` : "";
         lines.push(`  ${name.padEnd(16)} ${meta.label}${unit ? ` (${meta.unit})` : ""}; ${meta.min} to ${meta.max}${unit}, default ${meta.default}${unit}`);
+      } else if (field instanceof z.ZodDefault && field.def.innerType instanceof z.ZodBoolean) {
+        lines.push(`  ${name.padEnd(16)} true or false; default ${String(field.def.defaultValue)}`);
       } else if (field instanceof z.ZodDefault && field.def.innerType instanceof z.ZodEnum) {
         const options = (field.def.innerType as z.ZodEnum).options.join(", ");
         lines.push(`  ${name.padEnd(16)} ${field.description ?? name}: one of ${options}; default ${String(field.def.defaultValue)}`);
@@ -75,7 +77,7 @@ export function runCli(argv: string[], now: () => number = () => performance.now
     if (at < 1) return { code: 2, out: "", err: `--set expects name=value (got "${pair}").\n` };
     const raw = pair.slice(at + 1).trim();
     const asNumber = Number(raw);
-    input[pair.slice(0, at).trim()] = raw !== "" && Number.isFinite(asNumber) ? asNumber : raw;
+    input[pair.slice(0, at).trim()] = raw === "true" ? true : raw === "false" ? false : raw !== "" && Number.isFinite(asNumber) ? asNumber : raw;
   }
   const seed = values.seed === undefined ? 1 : Number(values.seed);
   if (!Number.isInteger(seed) || seed < 0) return { code: 2, out: "", err: `--seed must be a whole number from 0 (got ${values.seed}).\n` };
