@@ -150,12 +150,12 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
     const piston = staticBox(world, (xL + xR) / 2, firstRowY + (looseRows + 0.5) * rowSpacing + 2.5, inner - 0.5, 5, "pot");
 
     // Bookkeeping pointers along the chain: [0, landed) on the floor; [landed, firstLying) in the air.
-    /** First link of the unbroken run of links still lying in the pot. */
+    /** Lowest-numbered link still lying in the pot: links before it are in the air or landed. */
     let firstLying = firstInPile;
     let landed = 0;
     let parkedOnFloor = 0;
     const rimTopY = rimCentre.y - RIM_RADIUS_MM;
-    const firstLyingY = rimTopY - LEFT_PILE_MARGIN_MM;
+    const outOfPotY = rimTopY - LEFT_PILE_MARGIN_MM;
 
     const rise = newSeries("rise", "Rise of the chain above the rim", "m");
     const speed = newSeries("speed", "Chain speed", "m/s");
@@ -165,7 +165,6 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
     const betaPull = newSeries("betaPull", "Floor pull coefficient β", "");
     const windowTension = { pot: 0, potSteps: 0, floor: 0, floorSteps: 0 };
     let finishedAt: number | null = null;
-    const steadyFrom = { t: Number.POSITIVE_INFINITY };
 
     const jointHeight = (joint: PinJoint) => joint.a.position.y + Math.sin(joint.a.angle) * joint.aOffset;
     /** Tension along the chain at a joint this step, N (positive: pulling the links together). */
@@ -190,7 +189,7 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
         freezeRow(incoming + 1);
       }
     };
-    const inPot = (body: Matter.Body) => body.position.y > firstLyingY && body.position.x < xR;
+    const inPot = (body: Matter.Body) => body.position.y > outOfPotY && body.position.x < xR;
 
     // On the floor, or come to rest on the heap of links already there.
     const hasLanded = (body: Matter.Body) => {
@@ -307,7 +306,6 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
         alphaPush.v.push(flux > 0 ? 1 - tPot / flux : Number.NaN);
         betaPull.t.push(t);
         betaPull.v.push(flux > 0 ? tFloor / flux : Number.NaN);
-        if (!Number.isFinite(steadyFrom.t) && t > 0.6 && v > 0) steadyFrom.t = t;
       },
       finished: () => finishedAt !== null,
       series: () => [rise, speed, potTension, floorTension, alphaPush, betaPull],
@@ -356,6 +354,10 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
           lostAtPile: budget.lostAtPile,
           lostAtFloor: budget.lostAtFloor,
         };
+      },
+      movingShapes: () => {
+        const b = piston.body.bounds;
+        return [{ kind: "rect", role: "pot", x: metres((b.min.x + b.max.x) / 2), y: -metres((b.min.y + b.max.y) / 2), width: metres(b.max.x - b.min.x), height: metres(b.max.y - b.min.y), angle: 0 }];
       },
       // The chain still waiting below the frozen row is stock, not drawn.
       hidden: (i) => i >= frozenFirst() + linksPerRow && !world.isActive(bodies[i]!),
