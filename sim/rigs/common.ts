@@ -1,5 +1,6 @@
 import Matter from "matter-js";
 import { z } from "zod";
+import { type ChainSpec, elementPattern, jointIterationsFor } from "../chain/link-shapes";
 import { World, type WorldSettings } from "../core/world";
 import { metres, mm, ms } from "../core/units";
 import { describedNumber } from "../params";
@@ -30,6 +31,18 @@ export const worldSettingsFor = (dt: number, overrides: Partial<WorldSettings> =
 });
 
 export const createWorld = (dt: number, overrides: Partial<WorldSettings> = {}) => new World(worldSettingsFor(dt, overrides));
+
+/**
+ * What every rig starts from: a world with the step and joint iterations the chain needs, the
+ * chain's repeating element pattern, its pitch (joint to joint, mm) and its thickest element (mm).
+ */
+export function rigSetup(params: ChainSpec & { dt: number }, overrides: Partial<WorldSettings> = {}) {
+  const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params), ...overrides });
+  const pattern = elementPattern(params);
+  const pitch = pattern.reduce((sum, element) => sum + element.pitch, 0);
+  const thickness = Math.max(...pattern.map((element) => element.thickness));
+  return { world, pattern, pitch, thickness };
+}
 
 /** A static box in the internal frame, returned with its drawing in SI (y up). */
 export function staticBox(world: World, x: number, y: number, width: number, height: number, role: Extract<SceneShape, { kind: "rect" }>["role"], angle = 0) {

@@ -1,12 +1,12 @@
 import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, elementPattern, type ElementSpec, jointIterationsFor } from "../chain/link-shapes";
+import { chainSchema, type ElementSpec } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { G_SI, metres, mm } from "../core/units";
 import { describedNumber } from "../params";
 import { newSeries, type Settled } from "../probes/series";
 import { foldedChainAccel, foldedChainSpeedSquared } from "../theory/folded";
-import { createWorld, staticCircle, stepSchema } from "./common";
+import { rigSetup, staticCircle, stepSchema } from "./common";
 import type { RigDefinition, SceneShape } from "./rig";
 
 export const foldedSchema = chainSchema.extend({
@@ -54,10 +54,7 @@ export const foldedRig: RigDefinition<typeof foldedSchema> = {
   schema: foldedSchema,
   headline: { key: "accelRatio", label: "Free end's acceleration ÷ g (x from 0.4 L to 0.6 L)", unit: "" },
   create(params) {
-    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params), leverFromStepStart: params.leverFromStepStart });
-    const pattern = elementPattern(params);
-    const pitch = pattern.reduce((s, e) => s + e.pitch, 0);
-    const thickness = Math.max(...pattern.map((e) => e.thickness));
+    const { world, pattern, pitch, thickness } = rigSetup(params, { leverFromStepStart: params.leverFromStepStart });
     let links = Math.max(3, Math.round(mm(params.chainLength) / pitch));
     // One-element links: an odd count lets one link lie across the bottom with equal arms.
     if (pattern.length === 1 && links % 2 === 0) links += 1;

@@ -1,7 +1,7 @@
 import Matter from "matter-js";
 import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, elementPattern, jointIterationsFor, pickUpGeometry } from "../chain/link-shapes";
+import { chainSchema, pickUpGeometry } from "../chain/link-shapes";
 import { arc, type Point } from "../chain/path";
 import { seededRandom } from "../core/random";
 import { G_SI, metres, mm } from "../core/units";
@@ -11,7 +11,7 @@ import { newSeries, type Settled, settleOver, settleValues } from "../probes/ser
 import { fountainEnergyBudget, fountainSteady } from "../theory/fountain";
 import { idealAlphaBound } from "../theory/link-push";
 import { CALIBRATED_PILE_NOTE, ROD_KICK_MODEL_NOTE } from "../theory/theory-notes";
-import { createWorld, staticBox, staticCircle, stepSchema } from "./common";
+import { rigSetup, staticBox, staticCircle, stepSchema } from "./common";
 import type { RigDefinition, SceneShape } from "./rig";
 
 const { Body } = Matter;
@@ -61,11 +61,8 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
     // The predicted-angle joint solve is part of the fountain's calibration: with lever arms
     // from the start of the step the chain loses less energy in its waves and rises about
     // 0.24 of the drop at this step, above what real chains do (DEVELOPERS.md, "Simulation").
-    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params) });
-    const pattern = elementPattern(params);
+    const { world, pattern, pitch, thickness } = rigSetup(params);
     const elements = elementsFor(pattern, params.links);
-    const pitch = pattern.reduce((s, e) => s + e.pitch, 0);
-    const thickness = Math.max(...pattern.map((e) => e.thickness));
     const H = mm(params.potHeight);
     const lambda = params.lambda;
 

@@ -1,12 +1,12 @@
 import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, elementPattern, jointIterationsFor } from "../chain/link-shapes";
+import { chainSchema } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { G_SI, metres, mm } from "../core/units";
 import { describedNumber } from "../params";
 import { newSeries, type Settled, settleOver } from "../probes/series";
 import { catenaryFromSpan } from "../theory/catenary";
-import { createWorld, staticCircle, stepSchema } from "./common";
+import { rigSetup, staticCircle, stepSchema } from "./common";
 import type { RigDefinition, SceneShape } from "./rig";
 
 export const hangingSchema = chainSchema
@@ -34,9 +34,7 @@ export const hangingRig: RigDefinition<typeof hangingSchema> = {
   schema: hangingSchema,
   headline: { key: "sag", label: "Sag below the lower support", unit: "m" },
   create(params) {
-    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params) });
-    const pattern = elementPattern(params);
-    const pitch = pattern.reduce((s, e) => s + e.pitch, 0);
+    const { world, pattern, pitch } = rigSetup(params);
     const links = Math.max(2, Math.round(mm(params.chainLength) / pitch));
     const elements = elementsFor(pattern, links);
     const length = elements.reduce((s, e) => s + e.pitch, 0);

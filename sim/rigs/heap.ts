@@ -1,13 +1,13 @@
 import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, elementPattern, jointIterationsFor } from "../chain/link-shapes";
+import { chainSchema } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { seededRandom } from "../core/random";
 import { G_SI, metres, mm } from "../core/units";
 import { describedNumber } from "../params";
 import { newSeries, type Settled } from "../probes/series";
 import { heapLiftForce } from "../theory/heap";
-import { createWorld, staticBox, stepSchema } from "./common";
+import { rigSetup, staticBox, stepSchema } from "./common";
 import type { RigDefinition, SceneShape } from "./rig";
 
 export const heapSchema = chainSchema.extend({
@@ -31,10 +31,7 @@ export const heapRig: RigDefinition<typeof heapSchema> = {
   headline: { key: "force", label: "Pulling force", unit: "N" },
   create(params, seed) {
     const random = seededRandom(seed);
-    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params) });
-    const pattern = elementPattern(params);
-    const pitch = pattern.reduce((s, e) => s + e.pitch, 0);
-    const thickness = Math.max(...pattern.map((e) => e.thickness));
+    const { world, pattern, pitch, thickness } = rigSetup(params);
     // Enough chain for the whole lift plus a margin left on the heap.
     const links = Math.ceil((mm(params.liftHeight) + 300) / pitch);
     const elements = elementsFor(pattern, links);

@@ -1,13 +1,13 @@
 import type { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, elementPattern, jointIterationsFor } from "../chain/link-shapes";
+import { chainSchema } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { seededRandom } from "../core/random";
 import { G_SI, metres, mm } from "../core/units";
 import { describedNumber } from "../params";
 import { newSeries, type Settled } from "../probes/series";
 import { FALLING_CHAIN_READING_RATIO, fallingChainScaleReading } from "../theory/scale";
-import { createWorld, staticBox, stepSchema } from "./common";
+import { rigSetup, staticBox, stepSchema } from "./common";
 import type { RigDefinition, SceneShape } from "./rig";
 
 export const scaleSchema = chainSchema.extend({
@@ -40,10 +40,7 @@ export const scaleRig: RigDefinition<typeof scaleSchema> = {
   headline: { key: "readingRatio", label: "Reading ÷ weight already on the pan", unit: "" },
   create(params, seed) {
     const random = seededRandom(seed);
-    const world = createWorld(params.dt, { jointIterations: jointIterationsFor(params) });
-    const pattern = elementPattern(params);
-    const pitch = pattern.reduce((s, e) => s + e.pitch, 0);
-    const thickness = Math.max(...pattern.map((e) => e.thickness));
+    const { world, pattern, pitch, thickness } = rigSetup(params);
     const links = Math.max(2, Math.round(mm(params.chainLength) / pitch));
     const elements = elementsFor(pattern, links);
 
