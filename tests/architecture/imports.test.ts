@@ -41,6 +41,7 @@ function importsOf(file: string): { spec: string; target: string | null }[] {
     if (spec.startsWith(".")) target = relative(PROJECT_ROOT, resolve(PROJECT_ROOT, dirname(file), spec));
     else if (spec.startsWith("@/")) target = join("src", spec.slice(2));
     else if (spec.startsWith("@contracts/")) target = join("server/contracts", spec.slice("@contracts/".length));
+    else if (spec.startsWith("@sim/")) target = join("sim", spec.slice("@sim/".length));
     found.push({ spec, target });
   }
   return found;
