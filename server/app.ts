@@ -10,6 +10,8 @@ import "./auth/auth.types";
 import { authRoutes } from "./auth/auth.routes";
 import { createPassport, type OAuthSettings } from "./auth/passport";
 import { createSessionMiddleware } from "./auth/session";
+import { benchRoutes } from "./bench/bench.routes";
+import { createPhotoStore } from "./bench/photo-store";
 import { classesRoutes } from "./classes/classes.routes";
 import type { Database } from "./db/client";
 import { departmentRoutes } from "./department/department.routes";
@@ -43,6 +45,8 @@ export interface AppConfig {
   mailDir?: string | null;
   /** Cron pattern of the retention purge; null runs no schedule (tests run the purge themselves). */
   purgeSchedule?: string | null;
+  /** Folder for uploaded photos of real runs (`<dataDir>/uploads`); files there have server-made names. */
+  uploadsDir: string;
 }
 
 export interface AppDeps {
@@ -134,6 +138,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   // Before the classes router: admins may delete a class's pupil data, and its guard would stop them.
   app.use(retentionRoutes(db, purgeSchedule));
   app.use(classesRoutes(db));
+  app.use(benchRoutes(db, createPhotoStore(config.uploadsDir)));
   app.use(departmentRoutes(db));
   app.use(staffRoutes(db, realtime));
   if (config.demo && config.mailDir) app.use(devMailRoutes(config.mailDir));

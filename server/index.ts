@@ -68,6 +68,7 @@ async function main() {
           userProfileURL: env.GOOGLE_USERINFO_URL ?? "https://openidconnect.googleapis.com/v1/userinfo",
         },
         clientDir,
+        uploadsDir: resolve(env.LINKLEAP_DATA_DIR, "uploads"),
         trustProxy: 1,
       },
     });

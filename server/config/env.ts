@@ -19,7 +19,7 @@ export const envSchema = z.object({
   PORT: port(4300),
   /** The address people use to reach Linkleap (OAuth callback, links in e-mail). */
   PUBLIC_URL: z.url().optional(),
-  /** Where the demo keeps its database cluster, mail and secrets. */
+  /** Where the demo keeps its database cluster, mail and secrets; in both modes, uploaded photos (uploads/). */
   LINKLEAP_DATA_DIR: z.string().default(".data"),
 
   DATABASE_URL: optionalText,

@@ -15,6 +15,8 @@ export const ERROR_CODES = [
   "invitation_pending",
   "invitation_closed",
   "mail_not_sent",
+  "file_too_large",
+  "unsupported_file_type",
   "protocol_mismatch",
   "internal_error",
 ] as const;

@@ -4,6 +4,7 @@
  */
 import { sql } from "drizzle-orm";
 import {
+  doublePrecision,
   index,
   integer,
   json,
@@ -19,6 +20,8 @@ import {
 import type { PupilDataKind } from "../contracts/retention";
 import { DEFAULT_RETENTION, RETENTION_PERIODS } from "../contracts/retention";
 import { STAFF_ROLES } from "../contracts/staff-roles";
+import type { BenchSource, HeightUnit, PhotoMediaType } from "../contracts/bench";
+import type { PhotoMarks } from "../contracts/photo-measure";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
@@ -123,6 +126,55 @@ export const rosterEntries = pgTable(
     uniqueIndex("roster_entries_class_name_key").on(t.classId, sql`lower(${t.displayName})`),
     index("roster_entries_class_idx").on(t.classId, t.position),
   ],
+);
+
+/**
+ * A photo of a real run, uploaded by the class's teacher. The file lives under the uploads
+ * folder with a server-made name (`stored_name`, never anything the uploader typed); the type
+ * was sniffed from its bytes.
+ */
+export const benchPhotos = pgTable(
+  "bench_photos",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    classId: uuid("class_id")
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    uploadedBy: uuid("uploaded_by").references(() => staff.id, { onDelete: "set null" }),
+    storedName: text("stored_name").notNull(),
+    mediaType: text("media_type").$type<PhotoMediaType>().notNull(),
+    byteSize: integer("byte_size").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("bench_photos_class_idx").on(t.classId), uniqueIndex("bench_photos_stored_name_key").on(t.storedName)],
+);
+
+/**
+ * Bench data: one real run's measurements, in SI. Belongs to a class; `lesson_id` is for the
+ * live lesson it was recorded in, once those exist. Deleting a photo keeps the runs measured
+ * on it (their `photo_id` becomes null): the numbers stay, the picture goes.
+ */
+export const benchRuns = pgTable(
+  "bench_runs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    classId: uuid("class_id")
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    lessonId: uuid("lesson_id"),
+    potHeightM: doublePrecision("pot_height_m").notNull(),
+    riseM: doublePrecision("rise_m").notNull(),
+    speedMps: doublePrecision("speed_mps"),
+    heightUnit: text("height_unit").$type<HeightUnit>().notNull(),
+    note: text("note").notNull().default(""),
+    source: text("source").$type<BenchSource>().notNull(),
+    photoId: uuid("photo_id").references(() => benchPhotos.id, { onDelete: "set null" }),
+    /** The five marks (photo pixels) a photo measurement was computed from. */
+    photoMarks: jsonb("photo_marks").$type<PhotoMarks>(),
+    createdBy: uuid("created_by").references(() => staff.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("bench_runs_class_idx").on(t.classId, t.createdAt)],
 );
 
 /**

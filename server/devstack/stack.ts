@@ -122,6 +122,7 @@ export async function startStack(options: StackOptions, stops = new StopList()):
         extraOrigins: options.extraOrigins,
         clientDir: options.clientDir,
         mailDir: join(dataDir, "mail"),
+        uploadsDir: join(dataDir, "uploads"),
       },
     });
     await server.listen(options.port, options.host);

@@ -14,6 +14,8 @@ const STATUS: Record<ErrorCode, number> = {
   invitation_closed: 409,
   // The change was saved, but the mail server did not take the message.
   mail_not_sent: 502,
+  file_too_large: 413,
+  unsupported_file_type: 415,
   protocol_mismatch: 400,
   internal_error: 500,
 };

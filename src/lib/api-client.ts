@@ -58,6 +58,8 @@ export interface RequestOptions {
   method?: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
   /** Sent as JSON. */
   body?: unknown;
+  /** Sent as multipart form data instead (file uploads); the browser sets the boundary. */
+  form?: FormData;
   /** Query string parameters; undefined values are left out. */
   query?: Record<string, string | undefined>;
   signal?: AbortSignal;
@@ -87,16 +89,16 @@ async function readJson(response: Response): Promise<unknown> {
  * untouched so React Query can tell it apart from a failure.
  */
 export async function apiRequest<T>(path: string, options: RequestOptions = {}, fetchImpl: typeof fetch = fetch): Promise<T> {
-  const { method = "GET", body, query, signal } = options;
+  const { method = "GET", body, form, query, signal } = options;
   const headers: Record<string, string> = { Accept: "application/json" };
-  if (body !== undefined) headers["Content-Type"] = "application/json";
+  if (body !== undefined && !form) headers["Content-Type"] = "application/json";
 
   let response: Response;
   try {
     response = await fetchImpl(buildUrl(path, query), {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: form ?? (body === undefined ? undefined : JSON.stringify(body)),
       credentials: "same-origin",
       signal,
     });

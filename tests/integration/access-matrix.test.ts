@@ -1,9 +1,10 @@
 /**
- * Every class, department, staff, invitation, pupil-data and captured-mail route against every
+ * Every class, bench-data, department, staff, invitation, pupil-data and captured-mail route against every
  * kind of caller. Teacher A owns the
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
  */
+import { PNG } from "pngjs";
 import { beforeAll, describe, expect, it } from "vitest";
 import type { ApiErrorBody } from "../../server/contracts/errors";
 import { PEOPLE, seedFixture, type Fixture, type PersonKey } from "../support/fixtures";
@@ -78,6 +79,51 @@ const ROUTES: RouteCase[] = [
     body: () => ({ names: ["Iris P.", "Jude K.", "Kofi M.", "Lola B."] }),
     expected: ownerOnly(200),
   },
+  { route: "GET /api/classes/:id/bench-runs", method: "GET", path: (f) => `/api/classes/${f.classA}/bench-runs`, expected: readable },
+  {
+    route: "POST /api/classes/:id/bench-runs",
+    method: "POST",
+    path: (f) => `/api/classes/${f.classA}/bench-runs`,
+    body: () => ({ source: "typed", runs: [{ potHeight: 1, rise: 0.12, heightUnit: "m" }] }),
+    expected: ownerOnly(201),
+  },
+  {
+    route: "DELETE /api/classes/:id/bench-runs/:runId",
+    method: "DELETE",
+    path: (f) => `/api/classes/${f.classA}/bench-runs/${made.benchRunId}`,
+    expected: ownerOnly(204),
+  },
+  { route: "GET /api/classes/:id/bench-photos", method: "GET", path: (f) => `/api/classes/${f.classA}/bench-photos`, expected: readable },
+  {
+    route: "POST /api/classes/:id/bench-photos",
+    method: "POST",
+    path: (f) => `/api/classes/${f.classA}/bench-photos`,
+    // No file: the owner gets a 400 for the missing photo; everyone else is stopped before the body is read.
+    expected: ownerOnly(400),
+  },
+  {
+    route: "GET /api/classes/:id/bench-photos/:photoId/image",
+    method: "GET",
+    path: (f) => `/api/classes/${f.classA}/bench-photos/${made.benchPhotoId}/image`,
+    expected: readable,
+  },
+  {
+    route: "POST /api/classes/:id/bench-photos/:photoId/measurements",
+    method: "POST",
+    path: (f) => `/api/classes/${f.classA}/bench-photos/${made.benchPhotoId}/measurements`,
+    body: () => ({
+      marks: { rim: { x: 0, y: 500 }, crest: { x: 0, y: 444 }, floor: { x: 0, y: 900 }, referenceStart: { x: 100, y: 700 }, referenceEnd: { x: 220, y: 860 } },
+      referenceLength: 0.5,
+      referenceUnit: "m",
+    }),
+    expected: ownerOnly(201),
+  },
+  {
+    route: "DELETE /api/classes/:id/bench-photos/:photoId",
+    method: "DELETE",
+    path: (f) => `/api/classes/${f.classA}/bench-photos/${made.benchPhotoId}`,
+    expected: ownerOnly(204),
+  },
   {
     route: "GET /api/department/classes",
     method: "GET",
@@ -151,6 +197,8 @@ const ROUTES: RouteCase[] = [
 
 const ctx = useTestStack(seedFixture);
 const agents = new Map<Caller, HttpAgent>();
+/** Bench data teacher A makes before the matrix runs: a typed run and an uploaded photo. */
+const made = { benchRunId: "", benchPhotoId: "" };
 
 beforeAll(async () => {
   for (const caller of CALLERS) {
@@ -158,18 +206,33 @@ beforeAll(async () => {
     if (caller !== "anonymous") await signIn(agent, PEOPLE[caller].email);
     agents.set(caller, agent);
   }
+  const owner = agents.get("teacherA")!;
+  const run = await owner.json<{ id: string }[]>(`/api/classes/${ctx.fixture.classA}/bench-runs`, {
+    method: "POST",
+    json: { source: "typed", runs: [{ potHeight: 1, rise: 0.13, heightUnit: "m" }] },
+  });
+  made.benchRunId = run.body[0]!.id;
+  const form = new FormData();
+  const png = new PNG({ width: 8, height: 8 });
+  form.append("photo", new Blob([new Uint8Array(PNG.sync.write(png))], { type: "image/png" }), "run.png");
+  const photo = await owner.request(`/api/classes/${ctx.fixture.classA}/bench-photos`, { method: "POST", body: form });
+  made.benchPhotoId = ((await photo.json()) as { id: string }).id;
 });
 
 describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
   it.each(CALLERS)("as %s", async (caller) => {
     const agent = agents.get(caller)!;
-    const { status, body: reply } = await agent.json<unknown>(path(ctx.fixture), { method, json: body?.(caller, ctx.fixture) });
+    const res = await agent.request(path(ctx.fixture), { method, json: body?.(caller, ctx.fixture) });
+    const status = res.status;
+    const text = await res.text();
+    // Photos answer with image bytes; everything else, and every refusal, is JSON.
+    const reply = res.headers.get("content-type")?.startsWith("application/json") ? (JSON.parse(text) as unknown) : text;
     expect(status).toBe(expected[caller]);
     if (status >= 400) {
       // Refusals carry an error code and nothing about the resource.
       const error = reply as ApiErrorBody;
       expect(Object.keys(error)).toEqual(["error"]);
-      expect(error.error.code).toBe({ 401: "unauthenticated", 403: "forbidden", 404: "not_found" }[status]);
+      expect(error.error.code).toBe({ 400: "bad_request", 401: "unauthenticated", 403: "forbidden", 404: "not_found" }[status]);
       expect(JSON.stringify(reply)).not.toContain(ctx.fixture.classA);
       expect(JSON.stringify(reply)).not.toContain("Physics");
     }

@@ -44,6 +44,8 @@ export interface TestStack {
   provider: SignInProvider;
   /** The local SMTP server this app sends through; its folder is the app's captured mail. */
   mail: MailCatcher;
+  /** The app's folder of uploaded photos. */
+  uploadsDir: string;
   /** Stops the app (not the provider) so a test can start another on the same port and database. */
   restartApp(): Promise<void>;
   close(): Promise<void>;
@@ -81,6 +83,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
   const providerUrl = `http://127.0.0.1:${providerAddress.port}`;
   const mailDir = join(TEST_DATA_DIR, "mail", randomBytes(5).toString("hex"));
   const mail = createMailCatcher({ dir: mailDir });
+  const uploadsDir = join(TEST_DATA_DIR, "uploads", randomBytes(5).toString("hex"));
   const smtp = await mail.listen(0);
   const mailer = createMailer({
     host: "127.0.0.1",
@@ -99,6 +102,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
         publicUrl: url,
         demo: options.demo ?? true,
         mailDir,
+        uploadsDir,
         purgeSchedule: options.purgeSchedule ?? null,
         sessionSecret: TEST_SESSION_SECRET,
         oauth: { clientID: "linkleap-test", clientSecret: "test-client-secret", ...signInProviderEndpoints(providerUrl) },
@@ -130,6 +134,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
     providerUrl,
     provider,
     mail,
+    uploadsDir,
     server,
     async restartApp() {
       await stack.server.close();
@@ -142,6 +147,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
       mailer.close();
       await mail.close();
       rmSync(mailDir, { recursive: true, force: true });
+      rmSync(uploadsDir, { recursive: true, force: true });
     },
   };
   return stack;

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { lazy, Suspense, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
 import { Link, useParams } from "react-router";
 import type { ClassSummary } from "@contracts/classes";
@@ -21,6 +21,9 @@ import { useDocumentTitle } from "@/hooks/use-document-title";
 import { useUnsavedChanges } from "@/hooks/use-unsaved-changes";
 import { isApiError } from "@/lib/api-client";
 import { RequireRole } from "../layouts/require-role";
+
+// The chart and drawing libraries load only when a class page shows its real runs.
+const RealRunsSection = lazy(() => import("@/features/bench/components/real-runs-section"));
 
 export function Component() {
   return (
@@ -113,6 +116,9 @@ function ClassView({ item }: { item: ClassSummary }) {
       <div className="grid gap-6">
         <ClassDetailsSection item={item} onDirtyChange={setDetailsDirty} />
         <RosterSection item={item} onDirtyChange={setRosterDirty} />
+        <Suspense fallback={<SkeletonList rows={2} label="Loading the real runs…" />}>
+          <RealRunsSection item={item} />
+        </Suspense>
         {readOnly ? null : <ArchiveClassSection item={item} />}
         {readOnly ? null : <PupilDataSection item={item} />}
       </div>

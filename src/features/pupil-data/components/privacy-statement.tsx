@@ -29,6 +29,12 @@ export function PrivacyStatement() {
             the class’s teacher. A roster is optional.
           </li>
           <li>
+            <strong>Photos of real chain runs</strong>, uploaded by a class’s teacher to measure a run. They should show the
+            apparatus, not pupils’ faces, but a photo may show people. Only the class’s teacher and the head of its department
+            can see them; the teacher can delete a photo at any time, and its file is removed from the server at once (the
+            measurements taken from it stay). Bench data itself (pot heights, rises, speeds, notes) holds nothing about pupils.
+          </li>
+          <li>
             <strong>With live lessons</strong> (being built): a display name for each lesson, typed by the pupil or picked from
             the roster; each pupil’s predictions and the reasons they give; and their written explanations.
           </li>
