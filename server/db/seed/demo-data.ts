@@ -46,3 +46,17 @@ export const DEMO_CLASSES = [
   { teacher: "teacherA", name: "12 Physics, set 1", yearGroup: "Year 12", subject: "Physics", roster: roster(14, 5) },
   { teacher: "teacherB", name: "11C Combined Science", yearGroup: "Year 11", subject: "Combined science", roster: roster(28, 11) },
 ] as const satisfies readonly { teacher: DemoStaff["key"]; name: string; yearGroup: string; subject: string; roster: string[] }[];
+
+/**
+ * Example real runs for the demo's Year 12 class, so its "Real runs" graph is not empty.
+ * Invented numbers, labelled as such in their note; not measurements.
+ */
+export const DEMO_BENCH_RUNS = {
+  className: "12 Physics, set 1",
+  runs: [
+    { potHeightM: 0.6, riseM: 0.07, speedMps: 2.6, heightUnit: "cm" },
+    { potHeightM: 0.9, riseM: 0.1, speedMps: null, heightUnit: "cm" },
+    { potHeightM: 1.2, riseM: 0.15, speedMps: 3.7, heightUnit: "cm" },
+  ],
+  note: "Example run invented for the demo",
+} as const;

@@ -1,7 +1,7 @@
 import { count } from "drizzle-orm";
 import type { Db } from "../client";
-import { classes, departments, rosterEntries, schools, staff } from "../schema";
-import { DEMO_CLASSES, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
+import { benchRuns, classes, departments, rosterEntries, schools, staff } from "../schema";
+import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
 
 /**
  * Seeds the invented demo school on first run only: if any school exists, nothing happens.
@@ -48,6 +48,17 @@ export async function seedDemo(db: Db): Promise<boolean> {
       await tx
         .insert(rosterEntries)
         .values(c.roster.map((displayName, position) => ({ classId: row!.id, displayName, position })));
+      if (c.name === DEMO_BENCH_RUNS.className) {
+        await tx.insert(benchRuns).values(
+          DEMO_BENCH_RUNS.runs.map((run) => ({
+            classId: row!.id,
+            ...run,
+            note: DEMO_BENCH_RUNS.note,
+            source: "typed" as const,
+            createdBy: staffIds.get(c.teacher)!,
+          })),
+        );
+      }
     }
     return true;
   });
