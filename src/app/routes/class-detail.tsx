@@ -1,4 +1,5 @@
 import { lazy, Suspense, useState } from "react";
+import { ErrorBoundary } from "react-error-boundary";
 import { useQueryClient } from "@tanstack/react-query";
 import { Link, useParams } from "react-router";
 import type { ClassSummary } from "@contracts/classes";
@@ -116,9 +117,16 @@ function ClassView({ item }: { item: ClassSummary }) {
       <div className="grid gap-6">
         <ClassDetailsSection item={item} onDirtyChange={setDetailsDirty} />
         <RosterSection item={item} onDirtyChange={setRosterDirty} />
-        <Suspense fallback={<SkeletonList rows={2} label="Loading the real runs…" />}>
-          <RealRunsSection item={item} />
-        </Suspense>
+        {/* A failed chunk or a drawing error stays inside the section: the roster above still works. */}
+        <ErrorBoundary
+          fallbackRender={({ error, resetErrorBoundary }) => (
+            <ErrorState title="Could not show the real runs" error={error} onRetry={resetErrorBoundary} />
+          )}
+        >
+          <Suspense fallback={<SkeletonList rows={2} label="Loading the real runs…" />}>
+            <RealRunsSection item={item} />
+          </Suspense>
+        </ErrorBoundary>
         {readOnly ? null : <ArchiveClassSection item={item} />}
         {readOnly ? null : <PupilDataSection item={item} />}
       </div>
