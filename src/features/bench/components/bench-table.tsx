@@ -3,7 +3,7 @@ import { METRES_PER } from "@contracts/bench";
 import { Button } from "@/components/ui/button";
 import { SOURCE_STYLE, THEORY_RATIO } from "./bench-graph";
 
-const inUnit = (metres: number, unit: BenchRun["heightUnit"]) => `${Number((metres / METRES_PER[unit]).toPrecision(4))} ${unit}`;
+const inUnit = (metres: number, unit: BenchRun["heightUnit"], figures = 4) => `${Number((metres / METRES_PER[unit]).toPrecision(figures))} ${unit}`;
 const SHAPE_WORD = { circle: "●", rect: "■", triangle: "▲" } as const;
 
 /** The graph's numbers as a table: what a screen reader reads, and what anyone can check. */
@@ -35,11 +35,12 @@ export function BenchTable({ runs, canDelete, onDelete, deleting }: {
                 <span aria-hidden="true">{SHAPE_WORD[SOURCE_STYLE[run.source].shape]} </span>
                 {run.source === "photo" ? (run.photoId ? "Photo" : "Photo (since deleted)") : run.source === "csv" ? "CSV file" : "Typed"}
               </td>
-              <td className="px-3 py-2 font-mono">{inUnit(run.potHeightM, run.heightUnit)}</td>
-              <td className="px-3 py-2 font-mono">{inUnit(run.riseM, run.heightUnit)}</td>
-              <td className="px-3 py-2 font-mono text-ink-muted">{inUnit(THEORY_RATIO * run.potHeightM, run.heightUnit)}</td>
-              <td className="px-3 py-2 font-mono">{run.speedMps === null ? "—" : `${run.speedMps} m/s`}</td>
-              <td className="px-3 py-2 [overflow-wrap:anywhere]">{run.note}</td>
+              <td className="whitespace-nowrap px-3 py-2 font-mono">{inUnit(run.potHeightM, run.heightUnit)}</td>
+              <td className="whitespace-nowrap px-3 py-2 font-mono">{inUnit(run.riseM, run.heightUnit)}</td>
+              {/* Three figures: the theory is no more certain than α itself. */}
+              <td className="whitespace-nowrap px-3 py-2 font-mono text-ink-muted">{inUnit(THEORY_RATIO * run.potHeightM, run.heightUnit, 3)}</td>
+              <td className="whitespace-nowrap px-3 py-2 font-mono">{run.speedMps === null ? "—" : `${run.speedMps} m/s`}</td>
+              <td className="min-w-48 px-3 py-2 [overflow-wrap:anywhere]">{run.note}</td>
               {canDelete ? (
                 <td className="px-3 py-2">
                   <Button variant="quiet" busy={deleting === run.id} onClick={() => onDelete(run.id)} aria-label={`Delete the run with pot height ${inUnit(run.potHeightM, run.heightUnit)}`}>
