@@ -6,7 +6,7 @@
 import { PNG } from "pngjs";
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import { keepScreenshot, pickAccount, useDemoInBrowser } from "../support/browser";
+import { keepScreenshot, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
 
 const ctx = useDemoInBrowser();
 
@@ -48,14 +48,8 @@ function syntheticPhoto(): Buffer {
 
 describe("real runs on the class page", () => {
   it("a typed run and a photo measurement appear on the graph and in the table", async () => {
-    const context = await ctx.browser.newContext({ viewport: { width: 1280, height: 1000 } });
-    const page = await context.newPage();
-    const problems: string[] = [];
-    page.on("pageerror", (e) => problems.push(e.message));
-
-    await page.goto(`${ctx.stack.url}/sign-in`);
-    await pickAccount(page, "Tom Ashdown");
-    await page.waitForURL(`${ctx.stack.url}/`);
+    const { context, page, problems } = await watchedPage(ctx.browser, ctx.stack.url);
+    await signInAs(page, ctx.stack.url, "Tom Ashdown");
     await page.getByRole("link", { name: /10A Physics/ }).first().click();
     await page.getByRole("heading", { name: "Real runs" }).waitFor();
     await page.getByText("No real runs yet").waitFor();

@@ -3,20 +3,14 @@
  * and offers no save; a good file replaces the roster. Also the real-demonstrations guide.
  */
 import { describe, expect, it } from "vitest";
-import { keepScreenshot, pickAccount, useDemoInBrowser } from "../support/browser";
+import { keepScreenshot, pickAccount, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
 
 const ctx = useDemoInBrowser();
 
 describe("roster upload in the browser", () => {
   it("previews each row, refuses a file with a bad row, and saves a good one", async () => {
-    const context = await ctx.browser.newContext({ viewport: { width: 1280, height: 1000 } });
-    const page = await context.newPage();
-    const problems: string[] = [];
-    page.on("pageerror", (e) => problems.push(e.message));
-
-    await page.goto(`${ctx.stack.url}/sign-in`);
-    await pickAccount(page, "Tom Ashdown");
-    await page.waitForURL(`${ctx.stack.url}/`);
+    const { context, page, problems } = await watchedPage(ctx.browser, ctx.stack.url);
+    await signInAs(page, ctx.stack.url, "Tom Ashdown");
     await page.getByRole("link", { name: /12 Physics, set 1/ }).first().click();
     await page.getByRole("heading", { name: "12 Physics, set 1" }).waitFor();
     // The demo roster is there (the roster loads after the class heading).

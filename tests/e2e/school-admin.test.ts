@@ -4,21 +4,14 @@
  * signs in; the admin's pupil-data and privacy pages.
  */
 import { describe, expect, it } from "vitest";
-import { keepScreenshot, pickAccount, useDemoInBrowser } from "../support/browser";
+import { keepScreenshot, pickAccount, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
 
 const ctx = useDemoInBrowser();
 
 describe("the school admin in the browser", () => {
   it("invites a teacher, sees the captured e-mail, and the teacher signs in through its link", async () => {
-    const context = await ctx.browser.newContext({ viewport: { width: 1280, height: 900 } });
-    const page = await context.newPage();
-    const problems: string[] = [];
-    page.on("pageerror", (e) => problems.push(e.message));
-    page.on("console", (m) => m.type() === "error" && m.location().url.startsWith(ctx.stack.url) && problems.push(m.text()));
-
-    await page.goto(`${ctx.stack.url}/sign-in`);
-    await pickAccount(page, "Gareth Pell");
-    await page.waitForURL(`${ctx.stack.url}/staff`);
+    const { context, page, problems } = await watchedPage(ctx.browser, ctx.stack.url, { width: 1280, height: 900 });
+    await signInAs(page, ctx.stack.url, "Gareth Pell", "/staff");
     await page.getByRole("heading", { name: "Invite a member of staff" }).waitFor();
 
     // An empty form is refused with the reasons beside the fields, and nothing is sent.

@@ -5,19 +5,15 @@
  */
 import { describe, expect, it } from "vitest";
 import { DEMO_STAFF } from "../../server/db/seed/demo-data";
-import { keepScreenshot, pickAccount, useDemoInBrowser } from "../support/browser";
+import { keepScreenshot, pickAccount, useDemoInBrowser, watchedPage } from "../support/browser";
 
 const teacher = DEMO_STAFF.find((s) => s.key === "teacherA")!;
 const ctx = useDemoInBrowser();
 
 describe("a teacher's classes in the browser", () => {
   it("signs in as the demo teacher, creates a class, and finds it again after a reload", async () => {
-    const context = await ctx.browser.newContext({ viewport: { width: 1280, height: 800 } });
-    const page = await context.newPage();
-    const problems: string[] = [];
-    page.on("pageerror", (e) => problems.push(e.message));
+    const { context, page, problems } = await watchedPage(ctx.browser, ctx.stack.url, { width: 1280, height: 800 });
     page.on("response", (r) => r.status() >= 400 && problems.push(`${r.status()} ${new URL(r.url()).pathname}`));
-    page.on("console", (m) => m.type() === "error" && m.location().url.startsWith(ctx.stack.url) && problems.push(m.text()));
 
     // Signed out, any page leads to sign-in.
     await page.goto(`${ctx.stack.url}/classes`);

@@ -43,6 +43,26 @@ export function useDemoInBrowser(): TestContext<boolean> & { browser: Browser } 
 }
 
 /** From the sign-in page: the sign-in link, then the account named `name` on the local provider's page. */
+/**
+ * A fresh page in its own browser context that records what went wrong on it: script errors
+ * and console errors from the app's own origin (a test ends with `expect(problems).toEqual([])`).
+ */
+export async function watchedPage(browser: Browser, appUrl: string, viewport = { width: 1280, height: 1000 }) {
+  const context = await browser.newContext({ viewport });
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on("pageerror", (e) => problems.push(e.message));
+  page.on("console", (m) => m.type() === "error" && m.location().url.startsWith(appUrl) && problems.push(m.text()));
+  return { context, page, problems };
+}
+
+/** From the sign-in page, through the local sign-in provider, to the page a person lands on. */
+export async function signInAs(page: Page, appUrl: string, name: string, landing = "/"): Promise<void> {
+  await page.goto(`${appUrl}/sign-in`);
+  await pickAccount(page, name);
+  await page.waitForURL(`${appUrl}${landing}`);
+}
+
 export async function pickAccount(page: Page, name: string): Promise<void> {
   await page.getByRole("link", { name: "Sign in with your school account" }).click();
   await page.getByRole("button", { name: new RegExp(name) }).click();

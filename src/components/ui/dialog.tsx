@@ -1,7 +1,9 @@
 import { useEffect, useId, useRef, type ReactNode } from "react";
+import { errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
 import { Button } from "./button";
 import { CloseIcon } from "./icons";
+import { Notice } from "./notice";
 
 interface DialogProps {
   open: boolean;
@@ -97,8 +99,8 @@ interface ConfirmDialogProps {
   cancelLabel?: string;
   tone?: "primary" | "danger";
   busy?: boolean;
-  /** Shown inside the dialog when the confirmed action failed. */
-  error?: ReactNode;
+  /** Why the confirmed action failed (e.g. a mutation's error), shown inside the dialog. */
+  error?: unknown;
 }
 
 /** Asks before something with consequences. The safe choice has focus first. */
@@ -117,7 +119,11 @@ export function ConfirmDialog({
   return (
     <Dialog open={open} onClose={onCancel} title={title}>
       {children ? <div className="grid gap-3">{children}</div> : null}
-      {error ? <div className="mt-4">{error}</div> : null}
+      {error ? (
+        <Notice tone="danger" live="alert" className="mt-4">
+          <p>{errorMessage(error)}</p>
+        </Notice>
+      ) : null}
       <div className="mt-6 flex flex-col-reverse gap-3 sm:flex-row sm:justify-end">
         <Button data-autofocus onClick={onCancel}>
           {cancelLabel}

@@ -5,7 +5,6 @@ import { ConfirmDialog } from "@/components/ui/dialog";
 import { ArchiveIcon, RestoreIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
 import { Section } from "@/components/ui/section";
-import { errorMessage } from "@/lib/api-client";
 import { useSetClassArchived } from "../api/set-class-archived";
 
 /** Archive a class that has finished (kept, out of the way) or bring an archived one back. */
@@ -60,13 +59,7 @@ export function ArchiveClassSection({ item }: { item: ClassSummary }) {
         busy={mutation.isPending}
         title={archived ? `Restore ${item.name}?` : `Archive ${item.name}?`}
         confirmLabel={archived ? "Restore class" : "Archive class"}
-        error={
-          mutation.error ? (
-            <Notice tone="danger" live="alert">
-              <p>{errorMessage(mutation.error)}</p>
-            </Notice>
-          ) : null
-        }
+        error={mutation.error}
       >
         <p>
           {archived

@@ -4,7 +4,6 @@ import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";
 import { RemoveIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
-import { errorMessage } from "@/lib/api-client";
 import { useDeleteClassPupilData } from "../api/delete-class-pupil-data";
 import { deletedSummary } from "../utils/deleted-summary";
 
@@ -60,13 +59,7 @@ export function DeletePupilDataButton({ classId, className, rosterCount, onDelet
         tone="danger"
         title={`Delete the pupil data of ${className}?`}
         confirmLabel="Delete pupil data"
-        error={
-          mutation.error ? (
-            <Notice tone="danger" live="alert">
-              <p>{errorMessage(mutation.error)}</p>
-            </Notice>
-          ) : null
-        }
+        error={mutation.error}
       >
         <p>
           This deletes the class’s roster ({rosterCount} {rosterCount === 1 ? "name" : "names"}) straight away. It cannot be

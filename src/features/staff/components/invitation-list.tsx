@@ -123,13 +123,7 @@ export function InvitationList() {
         title={cancelling ? `Cancel the invitation to ${cancelling.email}?` : "Cancel the invitation?"}
         confirmLabel="Cancel invitation"
         cancelLabel="Keep it"
-        error={
-          cancel.error ? (
-            <Notice tone="danger" live="alert">
-              <p>{errorMessage(cancel.error)}</p>
-            </Notice>
-          ) : null
-        }
+        error={cancel.error}
       >
         <p>The link in the e-mail stops working. You can invite the same address again later.</p>
       </ConfirmDialog>

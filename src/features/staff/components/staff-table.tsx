@@ -3,7 +3,6 @@ import type { StaffMember } from "@contracts/staff";
 import type { StaffRole } from "@contracts/staff-roles";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";
-import { Notice } from "@/components/ui/notice";
 import { CONTROL_CLASSES, FieldError } from "@/components/ui/field";
 import { CheckCircleIcon, RemoveIcon, WarnIcon } from "@/components/ui/icons";
 import { isApiError, errorMessage } from "@/lib/api-client";
@@ -175,13 +174,7 @@ function RemoveAccess({ member }: { member: StaffMember }) {
         tone="danger"
         title={`Remove ${member.displayName}’s access?`}
         confirmLabel="Remove access"
-        error={
-          remove.error ? (
-            <Notice tone="danger" live="alert">
-              <p>{errorMessage(remove.error)}</p>
-            </Notice>
-          ) : null
-        }
+        error={remove.error}
       >
         <p>
           {member.displayName} is signed out on every device straight away and can no longer sign in. Their classes stay with
