@@ -18,6 +18,9 @@ export const ERROR_CODES = [
   "file_too_large",
   "unsupported_file_type",
   "protocol_mismatch",
+  "lesson_ended",
+  "phase_closed",
+  "name_taken",
   "internal_error",
 ] as const;
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -4,6 +4,7 @@
  */
 import { sql } from "drizzle-orm";
 import {
+  boolean,
   doublePrecision,
   index,
   integer,
@@ -22,6 +23,8 @@ import { DEFAULT_RETENTION, RETENTION_PERIODS } from "../contracts/retention";
 import { STAFF_ROLES } from "../contracts/staff-roles";
 import type { BenchSource, HeightUnit, PhotoMediaType } from "../contracts/bench";
 import type { PhotoMarks } from "../contracts/photo-measure";
+import type { Question, Tally, TheoryValues } from "../contracts/lessons";
+import type { TrialPhase } from "../contracts/lesson-rules";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
@@ -175,6 +178,137 @@ export const benchRuns = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index("bench_runs_class_idx").on(t.classId, t.createdAt)],
+);
+
+/**
+ * A live lesson: one class, its teacher, a sequence of trials. The code is unique among open
+ * lessons only; once a lesson ends its code may be given out again.
+ */
+export const lessons = pgTable(
+  "lessons",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    classId: uuid("class_id")
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    teacherId: uuid("teacher_id")
+      .notNull()
+      .references(() => staff.id, { onDelete: "restrict" }),
+    code: varchar("code", { length: 6 }).notNull(),
+    status: text("status").$type<"open" | "ended">().notNull().default("open"),
+    /** Pupils' names on the board: off unless the teacher turns it on for this lesson. */
+    showNames: boolean("show_names").notNull().default(false),
+    currentTrialId: uuid("current_trial_id"),
+    startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
+    endedAt: timestamp("ended_at", { withTimezone: true }),
+  },
+  (t) => [
+    uniqueIndex("lessons_open_code_key").on(t.code).where(sql`${t.status} = 'open'`),
+    index("lessons_class_idx").on(t.classId, t.startedAt),
+    index("lessons_teacher_idx").on(t.teacherId, t.startedAt),
+  ],
+);
+
+/**
+ * A pupil in one lesson: a display name (typed, or picked from the roster) and nothing else.
+ * The device keeps a random resume token; only its hash is stored.
+ */
+export const lessonParticipants = pgTable(
+  "lesson_participants",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    lessonId: uuid("lesson_id")
+      .notNull()
+      .references(() => lessons.id, { onDelete: "cascade" }),
+    displayName: text("display_name").notNull(),
+    rosterEntryId: uuid("roster_entry_id").references(() => rosterEntries.id, { onDelete: "set null" }),
+    resumeTokenHash: text("resume_token_hash").notNull(),
+    joinedAt: timestamp("joined_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("lesson_participants_name_key").on(t.lessonId, sql`lower(${t.displayName})`),
+    uniqueIndex("lesson_participants_token_key").on(t.resumeTokenHash),
+  ],
+);
+
+/**
+ * One predict → observe → explain cycle on one rig with fixed parameters. The board's
+ * simulation records what it measured (SI) with the seed; the theory is worked out by the server.
+ */
+export const trials = pgTable(
+  "trials",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    lessonId: uuid("lesson_id")
+      .notNull()
+      .references(() => lessons.id, { onDelete: "cascade" }),
+    position: integer("position").notNull(),
+    rig: text("rig").notNull(),
+    params: jsonb("params").$type<Record<string, unknown>>().notNull(),
+    question: jsonb("question").$type<Question>().notNull(),
+    phase: text("phase").$type<TrialPhase>().notNull().default("setup"),
+    seed: integer("seed"),
+    measured: jsonb("measured").$type<Record<string, { value: number; uncertainty: number; unit: string; basis: string }>>(),
+    theory: jsonb("theory").$type<TheoryValues>(),
+    run: jsonb("run").$type<{ dt: number; steps: number; simulatedSeconds: number; wallSeconds: number | null }>(),
+    tallyFirst: jsonb("tally_first").$type<Tally>(),
+    tallySecond: jsonb("tally_second").$type<Tally>(),
+    ranAt: timestamp("ran_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("trials_lesson_position_key").on(t.lessonId, t.position)],
+);
+
+/**
+ * A pupil's answer for one round of a trial (1: before the run, 2: the re-vote). One per pupil
+ * and round: answering again replaces it. `client_id` comes from the device, so a resend after a
+ * lost acknowledgement finds the stored row instead of adding another.
+ */
+export const predictions = pgTable(
+  "predictions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    trialId: uuid("trial_id")
+      .notNull()
+      .references(() => trials.id, { onDelete: "cascade" }),
+    participantId: uuid("participant_id")
+      .notNull()
+      .references(() => lessonParticipants.id, { onDelete: "cascade" }),
+    round: integer("round").$type<1 | 2>().notNull(),
+    clientId: uuid("client_id").notNull(),
+    /** In the question's unit, as typed. */
+    value: doublePrecision("value"),
+    choice: integer("choice"),
+    reason: text("reason").notNull().default(""),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex("predictions_trial_participant_round_key").on(t.trialId, t.participantId, t.round),
+    uniqueIndex("predictions_participant_client_key").on(t.participantId, t.clientId),
+  ],
+);
+
+/** A pupil's explanation after the run; the teacher chooses which to show on the board (never with names). */
+export const explanations = pgTable(
+  "explanations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    trialId: uuid("trial_id")
+      .notNull()
+      .references(() => trials.id, { onDelete: "cascade" }),
+    participantId: uuid("participant_id")
+      .notNull()
+      .references(() => lessonParticipants.id, { onDelete: "cascade" }),
+    clientId: uuid("client_id").notNull(),
+    text: text("text").notNull(),
+    shownAt: timestamp("shown_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("explanations_participant_client_key").on(t.participantId, t.clientId),
+    index("explanations_trial_idx").on(t.trialId),
+  ],
 );
 
 /**

@@ -17,6 +17,9 @@ const STATUS: Record<ErrorCode, number> = {
   file_too_large: 413,
   unsupported_file_type: 415,
   protocol_mismatch: 400,
+  lesson_ended: 409,
+  phase_closed: 409,
+  name_taken: 409,
   internal_error: 500,
 };
 

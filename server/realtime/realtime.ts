@@ -55,6 +55,7 @@ export function createRealtime(httpServer: HttpServer, options: RealtimeOptions)
     const req = socket.request as EngineRequest;
     socket.data.staffId = req.user?.id ?? null;
     socket.data.sessionId = req.user ? (req.sessionID ?? null) : null;
+    socket.data.participant = null;
     next();
   });
 
