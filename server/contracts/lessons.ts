@@ -296,3 +296,30 @@ export interface LessonLookup {
   className: string;
   roster: { id: string; displayName: string; taken: boolean }[] | null;
 }
+
+// ---- HTTP (start, list, end) ----
+
+export interface StartedLesson {
+  lessonId: string;
+  code: string;
+}
+
+/** A class's lessons, newest first. */
+export interface LessonListItem {
+  id: string;
+  code: string;
+  status: "open" | "ended";
+  startedAt: string;
+  endedAt: string | null;
+  trialCount: number;
+  participantCount: number;
+}
+
+/** The signed-in teacher's lessons still open (to get back to the board). */
+export interface OpenLesson {
+  id: string;
+  code: string;
+  classId: string;
+  className: string;
+  startedAt: string;
+}

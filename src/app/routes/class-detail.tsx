@@ -17,6 +17,7 @@ import { useClass } from "@/features/classes/api/get-class";
 import { ArchiveClassSection } from "@/features/classes/components/archive-class-section";
 import { ClassDetailsSection } from "@/features/classes/components/class-details-section";
 import { RosterSection } from "@/features/classes/components/roster-section";
+import { LiveLessonsSection } from "@/features/live-lessons/components/live-lessons-section";
 import { DeletePupilDataButton } from "@/features/pupil-data/components/delete-pupil-data-button";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { useUnsavedChanges } from "@/hooks/use-unsaved-changes";
@@ -115,6 +116,7 @@ function ClassView({ item }: { item: ClassSummary }) {
         </Notice>
       ) : null}
       <div className="grid gap-6">
+        <LiveLessonsSection item={item} />
         <ClassDetailsSection item={item} onDirtyChange={setDetailsDirty} />
         <RosterSection item={item} onDirtyChange={setRosterDirty} />
         {/* A failed chunk or a drawing error stays inside the section: the roster above still works. */}

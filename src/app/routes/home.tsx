@@ -16,6 +16,7 @@ import { DepartmentShortcut } from "@/features/home/components/department-shortc
 import { Guides } from "@/features/home/components/guides";
 import { RecentLessons } from "@/features/home/components/recent-lessons";
 import { firstNameOf, greetingFor } from "@/features/home/utils/greeting";
+import { OpenLessons } from "@/features/live-lessons/components/open-lessons";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { useMe } from "../use-me";
 
@@ -39,6 +40,7 @@ function TeacherHome() {
         title={`${greetingFor(new Date().getHours())}, ${firstNameOf(me.displayName)}`}
         description="Your classes and lessons at a glance."
       />
+      <OpenLessons />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Section
           title="Your classes"

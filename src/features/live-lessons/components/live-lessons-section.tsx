@@ -1,0 +1,91 @@
+import { useNavigate } from "react-router";
+import type { ClassSummary } from "@contracts/classes";
+import type { LessonListItem } from "@contracts/lessons";
+import { Badge } from "@/components/ui/badge";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { ErrorState } from "@/components/ui/error-state";
+import { ClockIcon } from "@/components/ui/icons";
+import { Notice } from "@/components/ui/notice";
+import { Section } from "@/components/ui/section";
+import { SkeletonList } from "@/components/ui/skeleton";
+import { useClassLessons } from "../api/get-class-lessons";
+import { useStartLesson } from "../api/start-lesson";
+import { formatLessonDate } from "../utils/format-lesson-date";
+
+/**
+ * The class's live lessons: start one (straight onto the board), get back to an open one, and
+ * the ended ones, newest first.
+ */
+export function LiveLessonsSection({ item }: { item: ClassSummary }) {
+  const lessons = useClassLessons(item.id);
+  const start = useStartLesson(item.id);
+  const navigate = useNavigate();
+  const owner = item.access === "owner";
+  const canStart = owner && !item.archivedAt;
+
+  const onStart = () =>
+    start.mutate(undefined, { onSuccess: (started) => void navigate(`/lessons/${started.lessonId}/board`) });
+
+  return (
+    <Section
+      title="Live lessons"
+      description="Start a live lesson to put its board on the projector. Pupils join with the lesson code shown there."
+      actions={
+        canStart ? (
+          <Button variant="primary" busy={start.isPending} onClick={onStart}>
+            Start a live lesson
+          </Button>
+        ) : null
+      }
+    >
+      {start.isError ? (
+        <Notice tone="danger" className="mb-4" live="alert">
+          <p>Could not start the lesson: {start.error.message}</p>
+        </Notice>
+      ) : null}
+      {owner && item.archivedAt ? <p className="mb-4 text-ink-muted">Restore the class to start a lesson with it.</p> : null}
+      {lessons.isPending ? (
+        <SkeletonList rows={2} label="Loading the class’s lessons…" />
+      ) : lessons.isError ? (
+        <ErrorState title="Could not load the lessons" error={lessons.error} onRetry={() => void lessons.refetch()} retrying={lessons.isFetching} />
+      ) : lessons.data.length === 0 ? (
+        <div className="flex items-start gap-3 rounded-control border-2 border-dashed border-line px-4 py-5">
+          <ClockIcon className="mt-0.5 size-6 text-ink-muted" />
+          <p>No lessons with this class yet.</p>
+        </div>
+      ) : (
+        <ul className="grid gap-3" aria-label="Lessons, newest first">
+          {lessons.data.map((lesson) => (
+            <LessonRow key={lesson.id} lesson={lesson} owner={owner} />
+          ))}
+        </ul>
+      )}
+    </Section>
+  );
+}
+
+function LessonRow({ lesson, owner }: { lesson: LessonListItem; owner: boolean }) {
+  const open = lesson.status === "open";
+  return (
+    <li className="flex flex-wrap items-center justify-between gap-3 rounded-control border border-line px-4 py-3">
+      <div className="min-w-0">
+        <p className="font-bold">
+          {formatLessonDate(lesson.startedAt)}{" "}
+          {open ? <Badge tone="accent">Open · code {lesson.code}</Badge> : null}
+        </p>
+        <p className="text-ink-muted">
+          {lesson.trialCount} trial{lesson.trialCount === 1 ? "" : "s"} · {lesson.participantCount} pupil
+          {lesson.participantCount === 1 ? "" : "s"} took part
+        </p>
+      </div>
+      {open && owner ? (
+        <div className="flex flex-wrap gap-2">
+          <ButtonLink to={`/lessons/${lesson.id}/board`} variant="primary">
+            Open the board
+          </ButtonLink>
+          <ButtonLink to={`/lessons/${lesson.id}/remote`}>Remote</ButtonLink>
+        </div>
+      ) : null}
+    </li>
+  );
+}
