@@ -24,6 +24,7 @@ import { createRealtime, type IoServer, type Realtime } from "./realtime/realtim
 import { retentionRoutes } from "./retention/retention.routes";
 import { DEFAULT_PURGE_SCHEDULE, startPurgeSchedule, type PurgeSchedule } from "./retention/retention.scheduler";
 import { staffRoutes } from "./staff/staff.routes";
+import { DEFAULT_DIGEST_SCHEDULE, startDigestSchedule, type DigestSchedule } from "./digest/digest.scheduler";
 
 export interface AppConfig {
   /** How people reach this server, e.g. https://linkleap.school.example (no trailing slash). */
@@ -45,6 +46,8 @@ export interface AppConfig {
   mailDir?: string | null;
   /** Cron pattern of the retention purge; null runs no schedule (tests run the purge themselves). */
   purgeSchedule?: string | null;
+  /** Cron pattern of the heads of department's weekly digest; null runs no schedule (tests send it themselves). */
+  digestSchedule?: string | null;
   /** Folder for uploaded photos of real runs (`<dataDir>/uploads`); files there have server-made names. */
   uploadsDir: string;
 }
@@ -134,6 +137,11 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   const purgeSchedule: PurgeSchedule | null =
     config.purgeSchedule === null ? null : startPurgeSchedule(db, { pattern: config.purgeSchedule ?? DEFAULT_PURGE_SCHEDULE, log });
 
+  const digestSchedule: DigestSchedule | null =
+    config.digestSchedule === null
+      ? null
+      : startDigestSchedule(db, { pattern: config.digestSchedule ?? DEFAULT_DIGEST_SCHEDULE, mailer, publicUrl, log });
+
   app.use(invitationsRoutes({ db, mailer, publicUrl, log }));
   // Before the classes router: admins may delete a class's pupil data, and its guard would stop them.
   app.use(retentionRoutes(db, purgeSchedule));
@@ -176,6 +184,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
     },
     async close() {
       await purgeSchedule?.stop();
+      await digestSchedule?.stop();
       // io.close() also closes the http server; end sockets first so it can finish.
       realtime.io.disconnectSockets(true);
       await new Promise<void>((resolve) => {

@@ -312,6 +312,24 @@ export const explanations = pgTable(
 );
 
 /**
+ * One weekly digest sent to one head of department for one week. The unique key makes a send
+ * happen once per person and week, whatever restarts or second servers do.
+ */
+export const weeklyDigestSends = pgTable(
+  "weekly_digest_sends",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    staffId: uuid("staff_id")
+      .notNull()
+      .references(() => staff.id, { onDelete: "cascade" }),
+    /** Monday 00:00 UTC of the week reported. */
+    weekStart: timestamp("week_start", { withTimezone: true }).notNull(),
+    sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("weekly_digest_sends_staff_week_key").on(t.staffId, t.weekStart)],
+);
+
+/**
  * An admin's invitation to join the school's staff. Only a hash of the link's token is kept, so
  * a copy of the database cannot be turned into working links. An invitation is open while it is
  * neither accepted nor cancelled; past `expires_at` it can only be resent (with a new token).

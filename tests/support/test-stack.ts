@@ -8,7 +8,7 @@ import type { Database, Db } from "../../server/db/client";
 import { createTestDatabase, type TestDatabase } from "./test-database";
 import { createSignInProvider, signInProviderEndpoints, type ProviderAccount, type SignInProvider } from "../../server/devstack/sign-in-provider";
 import { createMailCatcher, type MailCatcher } from "../../server/devstack/mail-catcher";
-import { createMailer } from "../../server/mail/mailer";
+import { createMailer, type Mailer } from "../../server/mail/mailer";
 import { OUTSIDER, PEOPLE } from "./fixtures";
 import { TEST_DATA_DIR } from "./paths";
 
@@ -46,6 +46,8 @@ export interface TestStack {
   mail: MailCatcher;
   /** The app's folder of uploaded photos. */
   uploadsDir: string;
+  /** The app's own mailer (to the local SMTP server), for tests that run mail jobs themselves. */
+  mailer: Mailer;
   /** Stops the app (not the provider) so a test can start another on the same port and database. */
   restartApp(): Promise<void>;
   close(): Promise<void>;
@@ -104,6 +106,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
         mailDir,
         uploadsDir,
         purgeSchedule: options.purgeSchedule ?? null,
+        digestSchedule: null,
         sessionSecret: TEST_SESSION_SECRET,
         oauth: { clientID: "linkleap-test", clientSecret: "test-client-secret", ...signInProviderEndpoints(providerUrl) },
         clientDir,
@@ -135,6 +138,7 @@ export async function startTestStack(database: Database, options: TestStackOptio
     provider,
     mail,
     uploadsDir,
+    mailer,
     server,
     async restartApp() {
       await stack.server.close();

@@ -1,0 +1,111 @@
+import { and, eq, gte, isNull, lt, sql } from "drizzle-orm";
+import type { Db } from "../db/client";
+import { classes, departments, lessonParticipants, lessons, schools, staff, trials, weeklyDigestSends } from "../db/schema";
+import type { Mailer } from "../mail/mailer";
+import { weeklyDigestMail, type DigestRow } from "./digest.mail";
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/** Monday 00:00 UTC of the week before the one `now` falls in: the week a digest reports. */
+export function reportedWeek(now: Date): { start: Date; end: Date } {
+  const midnight = Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate());
+  const daysSinceMonday = (new Date(midnight).getUTCDay() + 6) % 7;
+  const thisMonday = midnight - daysSinceMonday * DAY_MS;
+  return { start: new Date(thisMonday - 7 * DAY_MS), end: new Date(thisMonday) };
+}
+
+/** Lessons in one department in [start, end), per teacher and class: counts only, never pupils. */
+export async function departmentWeek(db: Db, departmentId: string, start: Date, end: Date): Promise<DigestRow[]> {
+  const trialsRun = db
+    .select({ lessonId: trials.lessonId, count: sql<number>`count(*)::int`.as("trials_run") })
+    .from(trials)
+    .where(sql`${trials.ranAt} is not null`)
+    .groupBy(trials.lessonId)
+    .as("trials_run");
+  const pupils = db
+    .select({ lessonId: lessonParticipants.lessonId, count: sql<number>`count(*)::int`.as("pupils") })
+    .from(lessonParticipants)
+    .groupBy(lessonParticipants.lessonId)
+    .as("pupils");
+  const rows = await db
+    .select({
+      teacherName: staff.displayName,
+      className: classes.name,
+      lessons: sql<number>`count(${lessons.id})::int`,
+      trialsRun: sql<number>`coalesce(sum(${trialsRun.count}), 0)::int`,
+      pupils: sql<number>`coalesce(sum(${pupils.count}), 0)::int`,
+    })
+    .from(lessons)
+    .innerJoin(classes, eq(classes.id, lessons.classId))
+    .innerJoin(staff, eq(staff.id, lessons.teacherId))
+    .leftJoin(trialsRun, eq(trialsRun.lessonId, lessons.id))
+    .leftJoin(pupils, eq(pupils.lessonId, lessons.id))
+    .where(and(eq(classes.departmentId, departmentId), gte(lessons.startedAt, start), lt(lessons.startedAt, end)))
+    .groupBy(staff.displayName, classes.name)
+    .orderBy(staff.displayName, classes.name);
+  return rows;
+}
+
+export interface DigestRunResult {
+  sent: number;
+  skipped: number;
+  failed: number;
+}
+
+/**
+ * Sends last week's digest to every head of department who has not had it yet. The row in
+ * weekly_digest_sends is claimed first and released if the mail server refuses the message, so
+ * a later run tries again and nobody gets two.
+ */
+export async function sendWeeklyDigests(
+  db: Db,
+  deps: { mailer: Pick<Mailer, "send">; publicUrl: string; now?: Date; log?: (message: string, error?: unknown) => void },
+): Promise<DigestRunResult> {
+  const { start, end } = reportedWeek(deps.now ?? new Date());
+  const heads = await db
+    .select({
+      id: staff.id,
+      email: staff.email,
+      displayName: staff.displayName,
+      departmentId: staff.departmentId,
+      departmentName: departments.name,
+      schoolName: schools.name,
+    })
+    .from(staff)
+    .innerJoin(departments, eq(departments.id, staff.departmentId))
+    .innerJoin(schools, eq(schools.id, staff.schoolId))
+    .where(and(eq(staff.role, "head_of_department"), isNull(staff.removedAt)));
+
+  const result: DigestRunResult = { sent: 0, skipped: 0, failed: 0 };
+  for (const head of heads) {
+    const claimed = await db
+      .insert(weeklyDigestSends)
+      .values({ staffId: head.id, weekStart: start })
+      .onConflictDoNothing()
+      .returning({ id: weeklyDigestSends.id });
+    if (claimed.length === 0) {
+      result.skipped++;
+      continue;
+    }
+    try {
+      const rows = await departmentWeek(db, head.departmentId!, start, end);
+      await deps.mailer.send(
+        weeklyDigestMail({
+          to: head.email,
+          headName: head.displayName,
+          departmentName: head.departmentName,
+          schoolName: head.schoolName,
+          weekStart: start,
+          rows,
+          overviewUrl: `${deps.publicUrl}/department`,
+        }),
+      );
+      result.sent++;
+    } catch (error) {
+      await db.delete(weeklyDigestSends).where(eq(weeklyDigestSends.id, claimed[0]!.id));
+      result.failed++;
+      deps.log?.(`[digest] could not send the weekly digest to staff ${head.id}`, error);
+    }
+  }
+  return result;
+}
