@@ -95,7 +95,9 @@ export async function rosterForLesson(db: Reader, classId: string, lessonId: str
     .select({
       id: rosterEntries.id,
       displayName: rosterEntries.displayName,
-      taken: sql<boolean>`exists (select 1 from ${lessonParticipants} where ${lessonParticipants.lessonId} = ${lessonId} and (${lessonParticipants.rosterEntryId} = ${rosterEntries.id} or lower(${lessonParticipants.displayName}) = lower(${rosterEntries.displayName})))`,
+      // Spelled out: in a one-table select drizzle leaves columns unqualified, and inside the
+      // sub-select they would name the participant's columns instead.
+      taken: sql<boolean>`exists (select 1 from lesson_participants lp where lp.lesson_id = ${lessonId} and (lp.roster_entry_id = roster_entries.id or lower(lp.display_name) = lower(roster_entries.display_name)))`,
     })
     .from(rosterEntries)
     .where(eq(rosterEntries.classId, classId))
@@ -110,8 +112,8 @@ export async function lessonsOfClass(db: Reader, classId: string) {
       status: lessons.status,
       startedAt: lessons.startedAt,
       endedAt: lessons.endedAt,
-      trialCount: sql<number>`(select count(*)::int from ${trials} where ${trials.lessonId} = ${lessons.id})`,
-      participantCount: sql<number>`(select count(*)::int from ${lessonParticipants} where ${lessonParticipants.lessonId} = ${lessons.id})`,
+      trialCount: sql<number>`(select count(*)::int from trials t where t.lesson_id = lessons.id)`,
+      participantCount: sql<number>`(select count(*)::int from lesson_participants lp where lp.lesson_id = lessons.id)`,
     })
     .from(lessons)
     .where(eq(lessons.classId, classId))
