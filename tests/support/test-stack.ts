@@ -46,8 +46,12 @@ export interface TestStack {
   mail: MailCatcher;
   /** The app's folder of uploaded photos. */
   uploadsDir: string;
-  /** Stops the app (not the provider) so a test can start another on the same port and database. */
-  restartApp(): Promise<void>;
+  /**
+   * Stops the app (not the provider) so a test can start another on the same port and database.
+   * `abrupt` drops every connection without telling sockets to stay away, as a crashed or killed
+   * server would: socket.io clients then reconnect by themselves.
+   */
+  restartApp(options?: { abrupt?: boolean }): Promise<void>;
   close(): Promise<void>;
 }
 
@@ -136,8 +140,14 @@ export async function startTestStack(database: Database, options: TestStackOptio
     mail,
     uploadsDir,
     server,
-    async restartApp() {
-      await stack.server.close();
+    async restartApp({ abrupt = false } = {}) {
+      if (abrupt) {
+        const old = stack.server;
+        await new Promise<void>((resolve) => {
+          old.io.close(() => resolve());
+          old.httpServer.closeAllConnections();
+        });
+      } else await stack.server.close();
       stack.server = makeApp();
       await stack.server.listen(port);
     },
