@@ -542,4 +542,39 @@ describe("a whole trial, as the board and the pupils see it", () => {
     expect(publicNext.trial!).toMatchObject({ position: 2, phase: "setup", result: null, answers: null });
     expect(publicNext.trial!.params).toEqual(teacherTrial.params);
   });
+
+  it("a trial added with its own set-up is checked against that rig; a choice question takes choices and counts that fit it", async () => {
+    const { code, lessonId, teacher } = await startLesson();
+    const { socket } = await joinAs(pool, code, "Fern G.");
+    const question = {
+      kind: "choice",
+      prompt: "How far will it sag?",
+      quantity: "sag",
+      unit: "cm",
+      choices: [{ label: "Less than 20 cm", max: 20 }, { label: "20 cm or more", min: 20 }],
+    };
+    const refused = await call(teacher, "trial:add", { lessonId, setup: { rig: "hanging", params: { span: 0.1 }, question } });
+    expect(codeOf(refused)).toBe("validation_failed");
+    expect("error" in refused && Object.keys(refused.error.fields ?? {})).toEqual(["params.span"]);
+    expect(await ctx.database.db.select().from(trials).where(eq(trials.lessonId, lessonId))).toHaveLength(1);
+
+    const { trialId } = await ok<{ trialId: string }>(teacher, "trial:add", { lessonId, setup: { rig: "hanging", params: { span: 1 }, question } });
+    await ok(teacher, "trial:show", { lessonId, trialId });
+    await ok(teacher, "trial:phase", { trialId, phase: "predict" });
+    expect(codeOf(await call(socket, "prediction:submit", { trialId, round: 1, clientId: randomUUID(), value: 12 }))).toBe("validation_failed");
+    expect(codeOf(await call(socket, "prediction:submit", { trialId, round: 1, clientId: randomUUID(), choice: 2 }))).toBe("validation_failed");
+    await ok(socket, "prediction:submit", { trialId, round: 1, clientId: randomUUID(), choice: 1, reason: "Long chain." });
+    expect(codeOf(await call(teacher, "trial:tally", { trialId, round: 1, counts: [3, 4, 5] }))).toBe("validation_failed");
+    await ok(teacher, "trial:tally", { trialId, round: 1, counts: [3, 4] });
+    const observed = nextEvent(socket, "lesson:changed", (l) => l.trial?.phase === "observe");
+    await ok(teacher, "trial:phase", { trialId, phase: "observe" });
+    const [view] = await observed;
+    // The device's answer and the show of hands, all without names.
+    const choices = view.trial!.answers!.map((a) => a.choice);
+    expect(choices.filter((c) => c === 0)).toHaveLength(3);
+    expect(choices.filter((c) => c === 1)).toHaveLength(5);
+    const [row] = await ctx.database.db.select().from(trials).where(eq(trials.id, trialId));
+    expect(row).toMatchObject({ rig: "hanging", position: 2 });
+    expect((row!.params as { span: number; chainLength: number }).span).toBe(1);
+  });
 });
