@@ -19,6 +19,8 @@ import { devMailRoutes } from "./dev-mail/dev-mail.routes";
 import { AppError } from "./http/app-error";
 import { apiNotFound, errorMiddleware } from "./http/error-middleware";
 import { invitationsRoutes } from "./invitations/invitations.routes";
+import { createLessonLive } from "./lessons/lessons.handlers";
+import { lessonsRoutes } from "./lessons/lessons.routes";
 import type { Mailer } from "./mail/mailer";
 import { createRealtime, type IoServer, type Realtime } from "./realtime/realtime";
 import { retentionRoutes } from "./retention/retention.routes";
@@ -112,6 +114,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   const passportSession = passport.session() as RequestHandler;
 
   const realtime = createRealtime(httpServer, { sessionMiddleware, passportSession, allowedOrigins });
+  const lessonLive = createLessonLive({ io: realtime.io, db, publicUrl, log });
 
   app.get("/api/health", async (_req, res) => {
     await db.execute(sql`select 1`);
@@ -146,6 +149,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   // Before the classes router: admins may delete a class's pupil data, and its guard would stop them.
   app.use(retentionRoutes(db, purgeSchedule));
   app.use(classesRoutes(db));
+  app.use(lessonsRoutes(db, lessonLive));
   app.use(benchRoutes(db, createPhotoStore(config.uploadsDir)));
   app.use(departmentRoutes(db));
   app.use(staffRoutes(db, realtime));

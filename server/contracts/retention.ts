@@ -37,13 +37,16 @@ export function retentionCutoff(period: RetentionPeriod, now: Date): Date {
 }
 
 /**
- * Kinds of pupil data a purge or a "delete now" removes. Today only roster names exist; live
- * lessons will add their display names, predictions, reasons and explanations here.
+ * Kinds of pupil data a purge or a "delete now" removes: roster names, and from live lessons the
+ * names pupils joined with, their predictions (with reasons) and their explanations.
  */
-export const PUPIL_DATA_KINDS = ["roster_names"] as const;
+export const PUPIL_DATA_KINDS = ["roster_names", "lesson_predictions", "lesson_explanations", "lesson_names"] as const;
 export type PupilDataKind = (typeof PUPIL_DATA_KINDS)[number];
 export const PUPIL_DATA_KIND_LABELS: Record<PupilDataKind, { one: string; many: string }> = {
   roster_names: { one: "roster name", many: "roster names" },
+  lesson_predictions: { one: "lesson prediction", many: "lesson predictions" },
+  lesson_explanations: { one: "lesson explanation", many: "lesson explanations" },
+  lesson_names: { one: "name used in a lesson", many: "names used in lessons" },
 };
 
 export const deletedCountSchema = z.object({ kind: z.enum(PUPIL_DATA_KINDS), count: z.number().int().min(0) });

@@ -1,7 +1,7 @@
 import { and, eq, inArray, isNotNull, lt } from "drizzle-orm";
 import type { PupilDataKind } from "../contracts/retention";
 import type { Db } from "../db/client";
-import { classes, rosterEntries } from "../db/schema";
+import { classes, explanations, lessonParticipants, lessons, predictions, rosterEntries, trials } from "../db/schema";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
@@ -9,9 +9,8 @@ type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
  * One kind of pupil data that the retention purge and "delete this class's pupil data now" remove.
  * Both go through this list, so a kind added here is covered by both.
  *
- * Today the only pupil data is roster names. Pupil answers arrive with live lessons (a display
- * name per lesson, predictions, reasons, explanations): each gets a target here whose clock
- * starts when its lesson ends.
+ * Pupil data: roster names, and from live lessons a display name per lesson, predictions with
+ * their reasons, and explanations. A lesson's data is on the clock from when the lesson started.
  */
 export interface PupilDataTarget {
   kind: PupilDataKind;
@@ -45,4 +44,50 @@ const rosterNamesOfArchivedClasses: PupilDataTarget = {
   },
 };
 
-export const PUPIL_DATA_TARGETS: readonly PupilDataTarget[] = [rosterNamesOfArchivedClasses];
+/** Ids of the lessons in scope: a school's lessons started before the cutoff, or all of one class's. */
+function lessonIds(tx: Tx, scope: { schoolId: string; cutoff: Date } | { classId: string }) {
+  if ("classId" in scope) return tx.select({ id: lessons.id }).from(lessons).where(eq(lessons.classId, scope.classId));
+  return tx
+    .select({ id: lessons.id })
+    .from(lessons)
+    .innerJoin(classes, eq(classes.id, lessons.classId))
+    .where(and(eq(classes.schoolId, scope.schoolId), lt(lessons.startedAt, scope.cutoff)));
+}
+
+/** The trials of those lessons (predictions and explanations hang off trials). */
+const trialIds = (tx: Tx, scope: Parameters<typeof lessonIds>[1]) =>
+  tx.select({ id: trials.id }).from(trials).where(inArray(trials.lessonId, lessonIds(tx, scope)));
+
+function lessonTarget(kind: PupilDataKind, remove: (tx: Tx, scope: Parameters<typeof lessonIds>[1]) => Promise<number>): PupilDataTarget {
+  return {
+    kind,
+    purgeSchool: (tx, schoolId, cutoff) => remove(tx, { schoolId, cutoff }),
+    deleteForClass: (tx, classId) => remove(tx, { classId }),
+  };
+}
+
+const lessonPredictions = lessonTarget("lesson_predictions", async (tx, scope) => {
+  const deleted = await tx.delete(predictions).where(inArray(predictions.trialId, trialIds(tx, scope))).returning({ id: predictions.id });
+  return deleted.length;
+});
+
+const lessonExplanations = lessonTarget("lesson_explanations", async (tx, scope) => {
+  const deleted = await tx.delete(explanations).where(inArray(explanations.trialId, trialIds(tx, scope))).returning({ id: explanations.id });
+  return deleted.length;
+});
+
+/** Last, so the answers above are counted before the names' cascade would take them. */
+const lessonNames = lessonTarget("lesson_names", async (tx, scope) => {
+  const deleted = await tx
+    .delete(lessonParticipants)
+    .where(inArray(lessonParticipants.lessonId, lessonIds(tx, scope)))
+    .returning({ id: lessonParticipants.id });
+  return deleted.length;
+});
+
+export const PUPIL_DATA_TARGETS: readonly PupilDataTarget[] = [
+  rosterNamesOfArchivedClasses,
+  lessonPredictions,
+  lessonExplanations,
+  lessonNames,
+];

@@ -48,8 +48,12 @@ export interface TestStack {
   uploadsDir: string;
   /** The app's own mailer (to the local SMTP server), for tests that run mail jobs themselves. */
   mailer: Mailer;
-  /** Stops the app (not the provider) so a test can start another on the same port and database. */
-  restartApp(): Promise<void>;
+  /**
+   * Stops the app (not the provider) so a test can start another on the same port and database.
+   * `abrupt` drops every connection without telling sockets to stay away, as a crashed or killed
+   * server would: socket.io clients then reconnect by themselves.
+   */
+  restartApp(options?: { abrupt?: boolean }): Promise<void>;
   close(): Promise<void>;
 }
 
@@ -140,8 +144,14 @@ export async function startTestStack(database: Database, options: TestStackOptio
     uploadsDir,
     mailer,
     server,
-    async restartApp() {
-      await stack.server.close();
+    async restartApp({ abrupt = false } = {}) {
+      if (abrupt) {
+        const old = stack.server;
+        await new Promise<void>((resolve) => {
+          old.io.close(() => resolve());
+          old.httpServer.closeAllConnections();
+        });
+      } else await stack.server.close();
       stack.server = makeApp();
       await stack.server.listen(port);
     },
