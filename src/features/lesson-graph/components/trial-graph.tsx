@@ -221,7 +221,8 @@ function NumberChart({ question, quantityLabel, answers, result, theory, bench =
           label: legendFor[row.key],
           data: row.values.map((v, j) => ({ x: v, y: rowY(i) + jitter(j) * 0.6 })),
           pointStyle: MARKERS[row.key].style,
-          pointRadius: radius,
+          // A triangle looks smaller than a circle of the same radius.
+          pointRadius: row.key === "bench" ? Math.round(radius * 1.4) : radius,
           pointHoverRadius: radius + 2,
           backgroundColor: marker(row.key),
           borderColor: colours.paper,
@@ -340,8 +341,8 @@ function ChoiceChart({
   const key = JSON.stringify([answers, result, theory, theme, fontSize, question]);
   const data = useMemo<ChartData<"bar">>(() => {
     const labels = question.choices.map((c, i) => {
-      const marks = [i === resultChoice ? "holds the result" : null, i === theoryChoice ? "holds the theory" : null].filter(Boolean);
-      return marks.length ? [c.label, `▲ ${marks.join(", ")}`] : c.label;
+      const marks = [i === resultChoice ? "result" : null, i === theoryChoice ? "theory" : null].filter(Boolean);
+      return marks.length ? [c.label, `▲ ${marks.join(" and ")}`] : c.label;
     });
     const resultFill = hatch(colours.result, colours.round1);
     return {
@@ -382,7 +383,7 @@ function ChoiceChart({
         },
         y: {
           beginAtZero: true,
-          title: { display: true, text: "Number of answers", color: colours.ink, font: fontOptions(fontSize) },
+          title: { display: true, text: "Answers", color: colours.ink, font: fontOptions(fontSize) },
           ticks: { color: colours.ink, font: fontOptions(fontSize), precision: 0 },
           grid: { color: colours.grid },
         },
