@@ -91,6 +91,7 @@ createRoot(document.getElementById("root")).render(
     <section data-testid="choice"><TrialGraph {...f.choice} theme={theme} /></section>
     <section data-testid="series"><FountainSeriesGraph {...f.series} theme={theme} /></section>
     <section data-testid="tally" className="max-w-prose"><TallyForm question={f.number.question} round={1} initial={null} onSubmit={save} /></section>
+    <section data-testid="tally-choice" className="max-w-prose"><TallyForm question={f.choice.question} round={2} initial={{ counts: [0, 2, 0], values: null }} onSubmit={save} /></section>
   </main>,
 );
 `;
@@ -265,6 +266,34 @@ describe("tally form", () => {
     const saved = await page.evaluate(() => (window as unknown as { __tallies: unknown[] }).__tallies);
     expect(saved).toEqual([{ counts: null, values: [12.5, 13, 14.5] }]);
     await keepScreenshot(page, "e2e", "lesson-graph-tally");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("counts hands per choice with ± buttons of at least 44 px, refuses a count that is not a whole number, and saves", async () => {
+    const { context, page, problems } = await openPage("light");
+    const tally = page.getByTestId("tally-choice");
+    await tally.getByRole("group", { name: "Hands up for each choice (in the re-vote)" }).waitFor();
+    expect(await tally.getByLabel("10 to 20 cm", { exact: true }).inputValue()).toBe("2");
+    const plus = tally.getByRole("button", { name: "One more for Under 10 cm" });
+    const box = (await plus.boundingBox())!;
+    expect(Math.min(box.width, box.height)).toBeGreaterThanOrEqual(44);
+    expect(await tally.getByRole("button", { name: "One fewer for Under 10 cm" }).isDisabled()).toBe(true);
+    await plus.click();
+    await plus.focus();
+    await page.keyboard.press("Enter");
+    expect(await tally.getByLabel("Under 10 cm", { exact: true }).inputValue()).toBe("2");
+    await tally.getByLabel("20 cm or more", { exact: true }).fill("one");
+    await tally.getByRole("button", { name: "Save the tally" }).click();
+    await tally.getByText("The count for “20 cm or more” is not a whole number.").waitFor();
+    await tally.getByLabel("20 cm or more", { exact: true }).fill("1");
+    expect(await tally.getByText(/^Total:/).innerText()).toBe("Total: 5 hands");
+    await tally.getByRole("button", { name: "Save the tally" }).click();
+    await tally.getByText("Saved: 5 hands over 3 choices.").waitFor();
+    const saved = await page.evaluate(() => (window as unknown as { __tallies: unknown[] }).__tallies);
+    expect(saved).toEqual([{ counts: [2, 2, 1], values: null }]);
+    await tally.scrollIntoViewIfNeeded();
+    await keepScreenshot(page, "e2e", "lesson-graph-tally-choice");
     expect(problems).toEqual([]);
     await context.close();
   });

@@ -100,15 +100,18 @@ function ChoiceTally({ question, round, initial, onSubmit }: TallyFormProps & { 
               <Button className="min-w-touch px-0" aria-label={`One fewer for ${choice.label}`} onClick={() => step(i, -1)} disabled={(parsed[i] ?? 0) <= 0}>
                 −
               </Button>
-              <input
-                id={inputId}
-                inputMode="numeric"
-                autoComplete="off"
-                value={texts[i]}
-                onChange={(e) => change(i, e.target.value)}
-                aria-invalid={parsed[i] === null || undefined}
-                className={cx(CONTROL_CLASSES, "w-20 text-center tabular-nums")}
-              />
+              {/* The control classes make an input full width: the box around it sets the width. */}
+              <div className="w-24 shrink-0">
+                <input
+                  id={inputId}
+                  inputMode="numeric"
+                  autoComplete="off"
+                  value={texts[i]}
+                  onChange={(e) => change(i, e.target.value)}
+                  aria-invalid={parsed[i] === null || undefined}
+                  className={cx(CONTROL_CLASSES, "text-center tabular-nums")}
+                />
+              </div>
               <Button className="min-w-touch px-0" aria-label={`One more for ${choice.label}`} onClick={() => step(i, 1)} disabled={(parsed[i] ?? 0) >= LESSON_LIMITS.tallyCount}>
                 +
               </Button>
