@@ -21,6 +21,7 @@ import { apiNotFound, errorMiddleware } from "./http/error-middleware";
 import { invitationsRoutes } from "./invitations/invitations.routes";
 import { createLessonLive } from "./lessons/lessons.handlers";
 import { lessonsRoutes } from "./lessons/lessons.routes";
+import { sendLessonSummary } from "./lesson-mail/lesson-summary.service";
 import type { Mailer } from "./mail/mailer";
 import { createRealtime, type IoServer, type Realtime } from "./realtime/realtime";
 import { retentionRoutes } from "./retention/retention.routes";
@@ -114,7 +115,15 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   const passportSession = passport.session() as RequestHandler;
 
   const realtime = createRealtime(httpServer, { sessionMiddleware, passportSession, allowedOrigins });
-  const lessonLive = createLessonLive({ io: realtime.io, db, publicUrl, log });
+  const lessonLive = createLessonLive({
+    io: realtime.io,
+    db,
+    publicUrl,
+    log,
+    // The teacher's summary goes after the lesson has ended; a mail server that is down costs only the e-mail.
+    onEnded: (lessonId) =>
+      void sendLessonSummary(db, { mailer, publicUrl }, lessonId).catch((error) => log("[lessons] summary e-mail not sent", error)),
+  });
 
   app.get("/api/health", async (_req, res) => {
     await db.execute(sql`select 1`);

@@ -38,13 +38,15 @@ export interface LessonLiveOptions {
   db: Db;
   publicUrl: string;
   log: (message: string, error?: unknown) => void;
+  /** Called once when a lesson ends (socket or HTTP), e.g. to send the teacher's summary. */
+  onEnded?: (lessonId: string) => void;
 }
 
 /**
  * Live lessons over socket.io: the request handlers and the broadcasts. All state is in
  * Postgres, so after a restart clients simply join (resume token) or watch again.
  */
-export function createLessonLive({ io, db, publicUrl, log }: LessonLiveOptions) {
+export function createLessonLive({ io, db, publicUrl, log, onEnded }: LessonLiveOptions) {
   const auditCounts = new WeakMap<IoSocket, number>();
 
   /** Pupils with at least one connected device in the lesson's room. */
@@ -223,8 +225,9 @@ export function createLessonLive({ io, db, publicUrl, log }: LessonLiveOptions) 
     });
 
     handle("lesson:end", lessonIdInputSchema, async ({ lessonId }) => {
-      const data = await service.endLesson(db, who(), lessonId);
-      return { data, after: changes(lessonId) };
+      const { justEnded } = await service.endLesson(db, who(), lessonId);
+      if (justEnded) onEnded?.(lessonId);
+      return { data: { lessonId }, after: changes(lessonId) };
     });
 
     socket.on("disconnect", () => {
@@ -242,6 +245,8 @@ export function createLessonLive({ io, db, publicUrl, log }: LessonLiveOptions) 
   return {
     /** Tell everyone in the lesson that it changed (used by the HTTP routes too). */
     lessonChanged,
+    /** A lesson was just ended over HTTP. */
+    ended: (lessonId: string) => onEnded?.(lessonId),
   };
 }
 export type LessonLive = ReturnType<typeof createLessonLive>;

@@ -28,7 +28,8 @@ export function lessonsRoutes(db: Db, live: LessonLive) {
 
   router.post("/api/lessons/:lessonId/end", teaching, async (req, res) => {
     const lessonId = parseId(req.params.lessonId, "That lesson");
-    const ended = await service.endLessonByActor(db, actorOf(req), lessonId);
+    const { justEnded, ...ended } = await service.endLessonByActor(db, actorOf(req), lessonId);
+    if (justEnded) live.ended(lessonId);
     await live.lessonChanged(lessonId);
     res.json(ended);
   });

@@ -165,11 +165,13 @@ export async function openLessons(db: Db, actor: Actor) {
 }
 
 /** Ends a lesson: its code is free again (the unique index covers open lessons only). Ending twice is fine. */
-async function markEnded(db: Db, lessonId: string) {
-  await db
+async function markEnded(db: Db, lessonId: string): Promise<boolean> {
+  const ended = await db
     .update(lessons)
     .set({ status: "ended", endedAt: new Date() })
-    .where(and(eq(lessons.id, lessonId), eq(lessons.status, "open")));
+    .where(and(eq(lessons.id, lessonId), eq(lessons.status, "open")))
+    .returning({ id: lessons.id });
+  return ended.length > 0;
 }
 
 export async function endLessonByActor(db: Db, actor: Actor, lessonId: string) {
@@ -182,9 +184,9 @@ export async function endLessonByActor(db: Db, actor: Actor, lessonId: string) {
     });
     throw forbidden("Only the lesson's teacher can end it.");
   }
-  await markEnded(db, lessonId);
+  const justEnded = await markEnded(db, lessonId);
   const after = await repo.findLessonWithClass(db, lessonId);
-  return { lessonId, status: after!.lesson.status, endedAt: after!.lesson.endedAt?.toISOString() ?? null };
+  return { lessonId, status: after!.lesson.status, endedAt: after!.lesson.endedAt?.toISOString() ?? null, justEnded };
 }
 
 // ---- Socket: authorisation ----
@@ -321,8 +323,7 @@ export async function changeSettings(db: Db, who: SocketWho, input: { lessonId: 
 
 export async function endLesson(db: Db, who: SocketWho, lessonId: string) {
   await lessonForTeacher(db, who, lessonId, "write");
-  await markEnded(db, lessonId);
-  return { lessonId };
+  return { lessonId, justEnded: await markEnded(db, lessonId) };
 }
 
 // ---- Socket: pupils ----
