@@ -60,3 +60,42 @@ export const DEMO_BENCH_RUNS = {
   ],
   note: "Example run invented for the demo",
 } as const;
+
+/**
+ * One finished live lesson for the Year 12 class, so its lesson list, the review and the
+ * comparison graphs have something to show. The pupils' answers, reasons and explanations are
+ * invented for the demo. The results are the simulation's own figures for these set-ups (the
+ * calibration table in DEVELOPERS.md, "Simulation"), not measurements of a real chain.
+ */
+export const DEMO_PAST_LESSON = {
+  className: "12 Physics, set 1",
+  daysAgo: 7,
+  minutes: 48,
+  code: "HKT4MP",
+  trials: [
+    {
+      potHeight: 1,
+      rise: { value: 0.143, uncertainty: 0.008 },
+      // Answers in cm, one per pupil in roster order; null: that pupil did not answer.
+      answers: [5, 12, 0, 20, 15, 8, 10, null, 25, 14, 6, 30],
+      revote: null,
+    },
+    {
+      potHeight: 1.5,
+      rise: { value: 0.227, uncertainty: 0.012 },
+      answers: [10, 18, 20, 30, 22, 15, 21, null, 35, 20, 12, 40],
+      revote: [20, 20, 22, 25, 22, 18, 21, null, 30, 21, 20, 24],
+    },
+  ],
+  reasons: [
+    "The pot pushes the chain up as it is pulled out.",
+    "It drops further so it goes faster.",
+    "",
+    "I think it just falls over the edge.",
+  ],
+  explanations: [
+    { pupil: 1, text: "The links are yanked up off the pile, so the chain has to loop above the rim before it can fall.", shown: true },
+    { pupil: 3, text: "A taller drop makes the chain faster, and a faster chain needs a bigger arch.", shown: true },
+    { pupil: 6, text: "I was wrong, I thought it would not rise at all.", shown: false },
+  ],
+} as const;

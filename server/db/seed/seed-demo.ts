@@ -1,7 +1,9 @@
-import { count } from "drizzle-orm";
+import { createHash, randomUUID } from "node:crypto";
+import { count, eq } from "drizzle-orm";
 import type { Db } from "../client";
-import { benchRuns, classes, departments, rosterEntries, schools, staff } from "../schema";
-import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
+import { benchRuns, classes, departments, explanations, lessonParticipants, lessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
+import { defaultParams, defaultQuestion, theoryFor } from "../../lessons/lessons.service";
+import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
 
 /**
  * Seeds the invented demo school on first run only: if any school exists, nothing happens.
@@ -48,6 +50,9 @@ export async function seedDemo(db: Db): Promise<boolean> {
       await tx
         .insert(rosterEntries)
         .values(c.roster.map((displayName, position) => ({ classId: row!.id, displayName, position })));
+      if (c.name === DEMO_PAST_LESSON.className) {
+        await seedPastLesson(tx, row!.id, staffIds.get(c.teacher)!, c.roster);
+      }
       if (c.name === DEMO_BENCH_RUNS.className) {
         await tx.insert(benchRuns).values(
           DEMO_BENCH_RUNS.runs.map((run) => ({
@@ -62,4 +67,89 @@ export async function seedDemo(db: Db): Promise<boolean> {
     }
     return true;
   });
+}
+
+type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+const MINUTE = 60_000;
+
+/** The demo's finished lesson: participants from the roster, two fountain trials run, answers and explanations. */
+async function seedPastLesson(tx: Tx, classId: string, teacherId: string, roster: readonly string[]) {
+  const plan = DEMO_PAST_LESSON;
+  const start = new Date(Date.now() - plan.daysAgo * 24 * 60 * MINUTE);
+  start.setUTCHours(10, 5, 0, 0);
+  const [lesson] = await tx
+    .insert(lessons)
+    .values({ classId, teacherId, code: plan.code, status: "ended", startedAt: start, endedAt: new Date(start.getTime() + plan.minutes * MINUTE) })
+    .returning({ id: lessons.id });
+  const pupils = roster.slice(0, plan.trials[0].answers.length);
+  const participants = await tx
+    .insert(lessonParticipants)
+    .values(
+      pupils.map((displayName, i) => ({
+        lessonId: lesson!.id,
+        displayName,
+        // Nobody can resume a demo participant: the hash is of a token that was never handed out.
+        resumeTokenHash: createHash("sha256").update(randomUUID()).digest("hex"),
+        joinedAt: new Date(start.getTime() + (1 + i / 10) * MINUTE),
+      })),
+    )
+    .returning({ id: lessonParticipants.id });
+
+  let lastTrialId: string | null = null;
+  for (const [t, spec] of plan.trials.entries()) {
+    const params = { ...defaultParams("fountain"), potHeight: spec.potHeight };
+    const ranAt = new Date(start.getTime() + (12 + 18 * t) * MINUTE);
+    const [trial] = await tx
+      .insert(trials)
+      .values({
+        lessonId: lesson!.id,
+        position: t + 1,
+        rig: "fountain",
+        params,
+        question: defaultQuestion("fountain"),
+        phase: spec.revote ? "revote" : "explain",
+        seed: 1,
+        measured: {
+          rise: { ...spec.rise, unit: "m", basis: "Demo example: the simulation's figure for this set-up, from the calibration table" },
+        },
+        theory: theoryFor("fountain", params, 1),
+        run: { dt: 0.00025, steps: 24_000, simulatedSeconds: 6, wallSeconds: null },
+        ranAt,
+        createdAt: new Date(ranAt.getTime() - 8 * MINUTE),
+      })
+      .returning({ id: trials.id });
+    lastTrialId = trial!.id;
+    const rounds = [{ round: 1 as const, values: spec.answers }, ...(spec.revote ? [{ round: 2 as const, values: spec.revote }] : [])];
+    for (const { round, values } of rounds) {
+      const rows = values.flatMap((value, i) =>
+        value === null
+          ? []
+          : [
+              {
+                trialId: trial!.id,
+                participantId: participants[i]!.id,
+                round,
+                clientId: randomUUID(),
+                value,
+                reason: round === 1 ? plan.reasons[i % plan.reasons.length]! : "",
+                createdAt: new Date(ranAt.getTime() - (round === 1 ? 4 : -6) * MINUTE + i * 1000),
+              },
+            ],
+      );
+      await tx.insert(predictions).values(rows);
+    }
+    if (t === 0) {
+      await tx.insert(explanations).values(
+        plan.explanations.map((e) => ({
+          trialId: trial!.id,
+          participantId: participants[e.pupil]!.id,
+          clientId: randomUUID(),
+          text: e.text,
+          shownAt: e.shown ? new Date(ranAt.getTime() + 6 * MINUTE) : null,
+          createdAt: new Date(ranAt.getTime() + 3 * MINUTE),
+        })),
+      );
+    }
+  }
+  await tx.update(lessons).set({ currentTrialId: lastTrialId }).where(eq(lessons.id, lesson!.id));
 }
