@@ -3,6 +3,7 @@
  * that path, and every chunk those import statically, read from Vite's build manifest. Sizes are
  * gzip at level 9 (node:zlib), as a server with compression or a pre-compressed deploy would send.
  */
+import { spawnSync } from "node:child_process";
 import { existsSync, readFileSync, readdirSync, statSync } from "node:fs";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
@@ -107,6 +108,20 @@ export function isBuildFresh(distDir: string, projectRoot: string): boolean {
   const inputs = ["src", "server/contracts", "sim", "index.html", "vite.config.ts", "tailwind.config.ts", "package-lock.json"];
   const newest = Math.max(...inputs.map((p) => newestUnder(join(projectRoot, p))));
   return statSync(manifest).mtimeMs > newest;
+}
+
+/**
+ * A production build into `outDir`, in a child process with NODE_ENV=production: inside vitest
+ * NODE_ENV is "test", and a build there bundles React's larger development code.
+ */
+export function buildProductionClient(projectRoot: string, outDir: string): void {
+  const vite = join(projectRoot, "node_modules", "vite", "bin", "vite.js");
+  const run = spawnSync(process.execPath, [vite, "build", "--outDir", outDir, "--emptyOutDir", "--logLevel", "warn"], {
+    cwd: projectRoot,
+    env: { ...process.env, NODE_ENV: "production" },
+    encoding: "utf8",
+  });
+  if (run.status !== 0) throw new Error(`vite build failed:\n${run.stdout}\n${run.stderr}`);
 }
 
 export const kb = (bytes: number) => (bytes / 1024).toFixed(1);

@@ -4,15 +4,20 @@
  * or if a library the pupil page must not load is in it.
  */
 import { join } from "node:path";
-import { build } from "vite";
 import { PROJECT_ROOT } from "../server/paths";
-import { PUPIL_FIRST_LOAD_LIMIT_KB, formatFirstLoadTable, isBuildFresh, measurePupilFirstLoad } from "./pupil-first-load";
+import {
+  PUPIL_FIRST_LOAD_LIMIT_KB,
+  buildProductionClient,
+  formatFirstLoadTable,
+  isBuildFresh,
+  measurePupilFirstLoad,
+} from "./pupil-first-load";
 
 const distDir = join(PROJECT_ROOT, "dist", "client");
 const rebuild = process.argv.includes("--build") || !isBuildFresh(distDir, PROJECT_ROOT);
 if (rebuild) {
   console.log("Building the client (production)…");
-  await build({ configFile: join(PROJECT_ROOT, "vite.config.ts"), logLevel: "warn", mode: "production" });
+  buildProductionClient(PROJECT_ROOT, distDir);
 } else {
   console.log(`Using the build in ${distDir} (newer than every source; pass --build to rebuild).`);
 }
