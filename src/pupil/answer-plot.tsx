@@ -10,9 +10,11 @@ import { choiceOfValue, formatNumber, plotDomain, stackDots, withUnit } from "./
 
 type OwnAnswer = { value: number | null; choice: number | null } | null;
 
-const W = 320;
+const W = 260;
 const DOT = 7;
 const SIDE = 10;
+/** A ring of card colour round each label, so lines passing behind never cut through the words. */
+const HALO = { paintOrder: "stroke", strokeWidth: 3, strokeLinejoin: "round" } as const;
 
 /** Label anchored so it stays inside the strip. */
 function anchorAt(x: number): "start" | "middle" | "end" {
@@ -50,13 +52,13 @@ function NumberStrip({ values, own, result, theory, unit, title }: {
   return (
     <figure className="mt-4">
       <figcaption className="font-bold">{title}</figcaption>
-      <svg viewBox={`0 0 ${W} ${height}`} className="mt-1 w-full" role="img" aria-label={description} data-testid="answer-plot">
+      <svg viewBox={`0 0 ${W} ${height}`} className="mt-1 w-full max-w-[26rem]" role="img" aria-label={description} data-testid="answer-plot">
         {/* axis and ticks */}
         <line x1={SIDE} x2={W - SIDE} y1={axisY} y2={axisY} className="stroke-line-strong" strokeWidth={1.5} />
         {domain.ticks.map((t) => (
           <g key={t}>
             <line x1={xOf(t)} x2={xOf(t)} y1={axisY} y2={axisY + 4} className="stroke-line-strong" />
-            <text x={xOf(t)} y={tickY} textAnchor="middle" className="fill-ink-muted" fontSize={10}>
+            <text x={xOf(t)} y={tickY} textAnchor="middle" className="fill-ink-muted stroke-surface" {...HALO} fontSize={10}>
               {formatNumber(t)}
             </text>
           </g>
@@ -68,18 +70,18 @@ function NumberStrip({ values, own, result, theory, unit, title }: {
         ) : null}
         {/* class answers: dots stacked above the axis */}
         {dots.map((d, i) => (
-          <circle key={i} cx={SIDE + d.x} cy={axisY - 4 - Math.min(d.level, levels - 1) * step} r={3} className="fill-accent" />
+          <circle key={i} cx={SIDE + d.x} cy={axisY - 4 - Math.min(d.level, levels - 1) * step} r={3.2} className="fill-accent" />
         ))}
         {/* result: solid line, labelled above */}
         <line x1={rx} x2={rx} y1={top - 6} y2={axisY} className="stroke-ink" strokeWidth={2} />
-        <text x={rx} y={11} textAnchor={anchorAt(rx)} className="fill-ink" fontSize={11} fontWeight={700}>
+        <text x={rx} y={11} textAnchor={anchorAt(rx)} className="fill-ink stroke-surface" {...HALO} fontSize={12} fontWeight={700}>
           Result {withUnit(result, unit)}
         </text>
         {/* theory: dashed line, labelled below */}
         {theory !== null ? (
           <>
             <line x1={xOf(theory)} x2={xOf(theory)} y1={top - 6} y2={theoryY - 10} className="stroke-ink" strokeWidth={1.5} strokeDasharray="4 3" />
-            <text x={xOf(theory)} y={theoryY} textAnchor={anchorAt(xOf(theory))} className="fill-ink" fontSize={11}>
+            <text x={xOf(theory)} y={theoryY} textAnchor={anchorAt(xOf(theory))} className="fill-ink stroke-surface" {...HALO} fontSize={12}>
               Theory {withUnit(theory, unit)}
             </text>
           </>
@@ -96,8 +98,9 @@ function NumberStrip({ values, own, result, theory, unit, title }: {
               x={xOf(own) + (anchorAt(xOf(own)) === "end" ? -10 : 10)}
               y={ownY + 1}
               textAnchor={anchorAt(xOf(own)) === "end" ? "end" : "start"}
-              className="fill-ink"
-              fontSize={11}
+              className="fill-ink stroke-surface"
+              {...HALO}
+              fontSize={12}
               fontWeight={700}
             >
               You {withUnit(own, unit)}

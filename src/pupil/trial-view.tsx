@@ -315,29 +315,22 @@ function ResultPanel({ state, trial }: { state: PupilState; trial: PublicTrial }
 
 const PHASE_ORDER = ["predict", "observe", "explain"] as const;
 
+/** Where the trial is: plain words, the current step in bold and marked for screen readers. */
 function PhaseSteps({ phase }: { phase: PublicTrial["phase"] }) {
   const current = phase === "revote" ? "explain" : phase;
+  const steps: PublicTrial["phase"][] = [...PHASE_ORDER, ...(phase === "revote" ? (["revote"] as const) : [])];
   return (
-    <ol className="mt-3 flex flex-wrap gap-2 text-sm" aria-label="Steps of this trial">
-      {PHASE_ORDER.map((p) => (
-        <li
-          key={p}
-          aria-current={p === current ? "step" : undefined}
-          className={cx(
-            "rounded-control border-2 px-2 py-0.5",
-            p === current ? "border-accent bg-accent-soft font-bold" : "border-line text-ink-muted",
-          )}
-        >
-          {TRIAL_PHASE_LABELS[p]}
-          {p === current ? <span className="sr-only"> (now)</span> : null}
-        </li>
-      ))}
-      {phase === "revote" ? (
-        <li aria-current="step" className="rounded-control border-2 border-accent bg-accent-soft px-2 py-0.5 font-bold">
-          {TRIAL_PHASE_LABELS.revote}
-          <span className="sr-only"> (now)</span>
-        </li>
-      ) : null}
+    <ol className="mt-2 flex flex-wrap items-center gap-x-1 text-ink-muted" aria-label="Steps of this trial">
+      {steps.map((p, i) => {
+        const now = p === phase || (p === current && phase !== "revote");
+        return (
+          <li key={p} aria-current={now ? "step" : undefined} className="flex items-center gap-1">
+            {i > 0 ? <span aria-hidden="true">→</span> : null}
+            <span className={cx(now && "font-bold text-ink underline decoration-2 underline-offset-4")}>{TRIAL_PHASE_LABELS[p]}</span>
+            {now ? <span className="sr-only"> (now)</span> : null}
+          </li>
+        );
+      })}
     </ol>
   );
 }
