@@ -10,7 +10,7 @@ import express from "express";
 import type { Browser } from "playwright-core";
 import { Server } from "socket.io";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import type { PredictionInput, PublicLesson, PublicTrial, PupilSession } from "../../server/contracts/lessons";
+import type { ExplanationInput, PredictionInput, PublicLesson, PublicTrial, PupilSession } from "../../server/contracts/lessons";
 import type { ClientToServerEvents, ServerToClientEvents } from "../../server/contracts/socket-events";
 import { measurePupilFirstLoad } from "../../scripts/pupil-first-load";
 import { keepScreenshot, launchBrowser, watchedPage } from "../support/browser";
@@ -59,6 +59,7 @@ function fakeLessonServer(clientDir: string) {
   /** Every prediction:submit received, in order (resends included). */
   const received: PredictionInput[] = [];
   const stored = new Map<string, PredictionInput & { participantId: string }>();
+  const explanations = new Map<string, ExplanationInput>();
   let dropNextAck = true;
 
   const app = express();
@@ -106,7 +107,8 @@ function fakeLessonServer(clientDir: string) {
       const p = socket.data.participant;
       if (!p) return ack({ error: { code: "unauthenticated", message: "Join the lesson first." } });
       received.push(payload);
-      if (trial.phase !== "predict") return ack({ error: { code: "phase_closed", message: "Predictions for this trial are closed." } });
+      const open = payload.round === 1 ? trial.phase === "predict" : trial.phase === "revote";
+      if (!open) return ack({ error: { code: "phase_closed", message: "Predictions for this trial are closed." } });
       if (!stored.has(payload.clientId)) stored.set(payload.clientId, { ...payload, participantId: p.id });
       if (dropNextAck) {
         // Stored, but the reply is lost and the Wi-Fi drops: the page must not count it as received.
@@ -114,6 +116,12 @@ function fakeLessonServer(clientDir: string) {
         setTimeout(() => socket.conn.close(), 150);
         return;
       }
+      ack({ data: { clientId: payload.clientId, storedAt: new Date().toISOString() } });
+    });
+    socket.on("explanation:submit", (payload, ack) => {
+      if (!socket.data.participant) return ack({ error: { code: "unauthenticated", message: "Join the lesson first." } });
+      if (trial.phase !== "explain") return ack({ error: { code: "phase_closed", message: "Explanations for this trial are closed." } });
+      explanations.set(payload.clientId, payload);
       ack({ data: { clientId: payload.clientId, storedAt: new Date().toISOString() } });
     });
   });
@@ -125,6 +133,7 @@ function fakeLessonServer(clientDir: string) {
     joins,
     received,
     stored,
+    explanations,
     io,
     async start() {
       await new Promise<void>((resolve) => http.listen(0, "127.0.0.1", resolve));
@@ -237,6 +246,26 @@ describe("pupil page", () => {
         }));
         expect(layout.scrollWidth).toBeLessThanOrEqual(viewport.width);
         expect(layout.small).toBe(0);
+
+        // Explain: the pupil writes why; then a re-vote keeps the first prediction in view.
+        server.trial.phase = "explain";
+        server.io.to(server.lesson.id).emit("lesson:changed", server.lesson);
+        await page.getByLabel("Why did it happen this way?").fill("The pot pushes the chain up as links turn.");
+        await page.getByRole("button", { name: "Send my explanation" }).click();
+        await page.getByText("Answer received").waitFor();
+        expect([...server.explanations.values()].map((e) => e.text)).toEqual(["The pot pushes the chain up as links turn."]);
+
+        server.trial.phase = "revote";
+        server.io.to(server.lesson.id).emit("lesson:changed", server.lesson);
+        await page.getByRole("heading", { name: "Your second prediction" }).waitFor();
+        await page.getByLabel("Your answer (cm)").fill("14");
+        await page.getByRole("button", { name: "Send my prediction" }).click();
+        await page.getByText("Answer received").waitFor();
+        await expect(page.getByTestId("own-answer-2").textContent()).resolves.toBe("14 cm");
+        await expect(page.getByTestId("compare-own").textContent()).resolves.toBe("12.5 cm");
+        await expect(page.getByTestId("compare-own-2").textContent()).resolves.toBe("14 cm");
+        expect(server.received.at(-1)).toMatchObject({ round: 2, value: 14 });
+        await keepScreenshot(page, "e2e", `34-pupil-${name}-revote`);
 
         // The lesson ends: a plain screen, and nothing about the pupil left on the device.
         server.lesson.status = "ended";
