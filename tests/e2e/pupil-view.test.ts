@@ -24,7 +24,13 @@ interface Participant {
 }
 
 /** One open lesson with a fountain trial in "predict", and a record of everything pupils sent. */
-function fakeLessonServer(clientDir: string) {
+const ROSTER = [
+  { id: randomUUID(), displayName: "Ada F.", taken: false },
+  { id: randomUUID(), displayName: "Ben K.", taken: true },
+  { id: randomUUID(), displayName: "Cleo M.", taken: false },
+];
+
+function fakeLessonServer(clientDir: string, options: { roster?: boolean; question?: PublicTrial["question"] } = {}) {
   const trial: PublicTrial = {
     id: randomUUID(),
     position: 1,
@@ -36,7 +42,13 @@ function fakeLessonServer(clientDir: string) {
       { key: "potHeight", label: "Pot height above the floor", unit: "m", value: 1.2 },
       { key: "linkShape", label: "Link shape", unit: "", value: "ball chain" },
     ],
-    question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true },
+    question: options.question ?? {
+      kind: "number",
+      prompt: "How high above the rim will the chain rise?",
+      quantity: "rise",
+      unit: "cm",
+      askReason: true,
+    },
     phase: "predict",
     answered: { 1: 0, 2: 0 },
     result: null,
@@ -84,7 +96,7 @@ function fakeLessonServer(clientDir: string) {
     socket.data.participant = null;
     socket.on("lesson:lookup", ({ code }, ack) => {
       if (code !== CODE) return ack({ error: { code: "not_found", message: "No open lesson has that code." } });
-      ack({ data: { lessonId: lesson.id, className: lesson.className, roster: null } });
+      ack({ data: { lessonId: lesson.id, className: lesson.className, roster: options.roster ? ROSTER : null } });
     });
     socket.on("lesson:join", (payload, ack) => {
       let p: Participant | undefined;
@@ -92,6 +104,12 @@ function fakeLessonServer(clientDir: string) {
         p = participants.find((x) => x.resumeToken === payload.resumeToken);
         if (!p) return ack({ error: { code: "not_found", message: "Join again with your name." } });
         joins.push({ by: "resumeToken", participantId: p.id });
+      } else if (payload.rosterEntryId) {
+        const entry = ROSTER.find((r) => r.id === payload.rosterEntryId && !r.taken);
+        if (!entry) return ack({ error: { code: "name_taken", message: "Someone has already joined with that name." } });
+        p = { id: randomUUID(), displayName: entry.displayName, resumeToken: randomBytes(24).toString("hex") };
+        participants.push(p);
+        joins.push({ by: "name", participantId: p.id });
       } else if (payload.name) {
         p = { id: randomUUID(), displayName: payload.name, resumeToken: randomBytes(24).toString("hex") };
         participants.push(p);
@@ -280,4 +298,55 @@ describe("pupil page", () => {
       }
     });
   }
+
+  it("phone: pick a name from the roster (taken names cannot be picked) and answer a choice question", async () => {
+    const server = fakeLessonServer(clientDir, {
+      roster: true,
+      question: {
+        kind: "choice",
+        prompt: "Compared with the drop, how high does the chain rise?",
+        quantity: "riseRatio",
+        unit: "",
+        askReason: false,
+        choices: [
+          { label: "It does not rise above the rim", min: null, max: 0.01 },
+          { label: "A little: under a tenth of the drop", min: 0.01, max: 0.1 },
+          { label: "More than a tenth of the drop", min: 0.1, max: null },
+        ],
+      },
+    });
+    const url = await server.start();
+    const { context, page, problems } = await watchedPage(browser, url, { width: 360, height: 640 });
+    try {
+      await page.goto(`${url}/join/${CODE.toLowerCase()}`);
+      await page.getByRole("group", { name: "Pick your name" }).waitFor();
+      await expect(page.getByRole("button", { name: /Ben K\./ }).isDisabled()).resolves.toBe(true);
+      await keepScreenshot(page, "e2e", "35-pupil-phone-roster");
+      await page.getByRole("button", { name: "Cleo M." }).click();
+      await page.getByText("Cleo M.").waitFor();
+      expect(server.participants.map((p) => p.displayName)).toEqual(["Cleo M."]);
+
+      // No reason asked: one tap on a choice sends it (the first reply is lost and resent).
+      expect(await page.getByLabel("Why do you think so? (optional)").count()).toBe(0);
+      await page.getByRole("button", { name: "A little: under a tenth of the drop" }).click();
+      await page.getByText("Answer received").waitFor({ timeout: 30_000 });
+      await expect(page.getByTestId("own-answer-1").textContent()).resolves.toBe("A little: under a tenth of the drop");
+      expect(server.received.map((r) => r.choice)).toEqual([1, 1]);
+      expect(server.stored.size).toBe(1);
+
+      server.trial.phase = "observe";
+      server.trial.result = { value: 0.14, uncertainty: 0.01, unit: "" };
+      server.trial.answers = [0, 1, 1, 2, 2, 2].map((choice) => ({ round: 1 as const, value: null, choice }));
+      server.io.to(server.lesson.id).emit("lesson:changed", server.lesson);
+      const plot = page.getByTestId("answer-plot");
+      await plot.getByText("◆ your answer").waitFor();
+      await plot.getByText("│ result").waitFor();
+      await plot.getByText("3 answers").waitFor();
+      await keepScreenshot(page, "e2e", "36-pupil-phone-choice-result");
+      expect(problems).toEqual([]);
+    } finally {
+      await context.close();
+      await server.stop();
+    }
+  });
 });
