@@ -14,6 +14,8 @@ export default defineConfig({
     outDir: "dist/client",
     emptyOutDir: true,
     sourcemap: true,
+    // scripts/pupil-size.ts reads it to measure the pupil page's first load.
+    manifest: true,
   },
   server: {
     host: "127.0.0.1",
