@@ -42,7 +42,8 @@ export function LessonControls({ lessonId, trial, showNames, send, onRun, size =
   };
   const move = (phase: TrialPhase) => trial && act(phase, () => send("trial:phase", { trialId: trial.id, phase }));
   const next = trial ? nextPhaseOf(trial.phase) : null;
-  const canRun = trial !== null && trial.phase !== "revote";
+  // Playing again is for the board; the remote can only start the run (the board plays it).
+  const canRun = trial !== null && (runNeedsPhaseChange(trial.phase) || (onRun !== undefined && trial.phase !== "revote"));
 
   return (
     <section aria-label="Lesson controls" className={cx("grid gap-3", className)}>

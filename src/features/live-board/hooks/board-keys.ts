@@ -3,8 +3,8 @@ export type BoardAction = "next-phase" | "run" | "toggle-play" | "toggle-slow" |
 
 /** Shown in the help overlay, in this order. */
 export const BOARD_SHORTCUTS: readonly { keys: string[]; action: BoardAction; text: string }[] = [
-  { keys: ["N"], action: "next-phase", text: "Next phase" },
-  { keys: ["R"], action: "run", text: "Run the simulation (closes predictions)" },
+  { keys: ["N"], action: "next-phase", text: "Next phase (→ too, while the run is not paused)" },
+  { keys: ["R"], action: "run", text: "Run: play the simulation (closes predictions if they are open)" },
   { keys: ["Space"], action: "toggle-play", text: "Pause or play" },
   { keys: ["S"], action: "toggle-slow", text: "Slow motion on or off (¼ speed)" },
   { keys: ["0", "Home"], action: "replay", text: "Replay from the start" },
