@@ -44,7 +44,7 @@ export interface BoardSlots {
 export function LessonBoard({ lessonId, graphPanel, tallyPanel }: { lessonId: string } & BoardSlots) {
   const { lesson, connection, refusal, send } = useTeacherLesson(lessonId);
   return (
-    <div data-theme="board" className="flex min-h-dvh flex-col bg-paper text-ink">
+    <div data-theme="board" className="flex h-dvh flex-col overflow-hidden bg-paper text-ink">
       {lesson ? (
         <BoardLayout lesson={lesson} send={send} status={<ConnectionStatus connection={connection} />} graphPanel={graphPanel} tallyPanel={tallyPanel} />
       ) : refusal ? (
@@ -146,7 +146,10 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
     [send, trial.id],
   );
 
+  // The run is not shown before predictions close: it would give the answer away.
+  const canPlay = trial.phase !== "setup" && trial.phase !== "predict";
   const onAction = (action: BoardAction) => {
+    if (!canPlay && action !== "next-phase" && action !== "run" && action !== "help") return;
     switch (action) {
       case "next-phase": {
         const next = nextPhaseOf(trial.phase);
@@ -187,8 +190,8 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
 
   return (
     <>
-      <main id="main" className="grid min-w-0 flex-1 grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-[2vw] p-[2vw]">
-        <div className="flex min-h-[60vh] min-w-0 flex-col gap-3">
+      <main id="main" className="grid min-h-0 min-w-0 flex-1 grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-[2vw] p-[2vw]">
+        <div className="flex min-h-0 min-w-0 flex-col gap-3">
           {look ? (
             <RigStage
               ref={stage}
@@ -213,7 +216,13 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
               Working out the run… {Math.round(sim.progress * 100)} %
             </p>
           ) : null}
-          <PlaybackBar controller={controller} className="text-[max(1rem,2vh)]" />
+          {canPlay ? (
+            <PlaybackBar controller={controller} className="text-[max(1rem,2vh)]" />
+          ) : (
+            <p className="text-[max(1rem,2.2vh)] text-ink-muted">
+              {trial.phase === "setup" ? "The rig at rest. The run is worked out once the set-up is fixed." : recording ? "The run is ready: it plays when predictions close (R)." : "The rig at rest."}
+            </p>
+          )}
           {result.failure ? (
             <Notice tone="danger" live="alert" actions={<Button onClick={result.retry}>Send the result again</Button>}>
               <p>The result was not saved: {result.failure}</p>
@@ -225,7 +234,7 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
             </Notice>
           ) : null}
         </div>
-        <div className="flex min-w-0 flex-col gap-[2vh] overflow-y-auto text-[max(1rem,2.4vh)]">
+        <div className="flex min-h-0 min-w-0 flex-col gap-[2vh] overflow-y-auto pr-1 text-[max(1rem,2.4vh)]">
           <section aria-labelledby="question-title">
             <h2 id="question-title" className="sr-only">Question</h2>
             <p className="text-[max(1.4rem,3.6vh)] font-bold leading-snug">{question.prompt}</p>

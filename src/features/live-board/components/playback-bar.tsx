@@ -17,13 +17,13 @@ export function PlaybackBar({ controller, className }: { controller: PlaybackCon
   return (
     <div className={cx("flex flex-wrap items-center gap-3", className)}>
       <Button variant="primary" disabled={disabled} onClick={() => controller.toggle()} aria-keyshortcuts="Space" className="min-w-32">
-        {s.playing ? "❚❚ Pause" : s.ended ? "↻ Play again" : "▶ Play"}
+        {s.playing ? "Pause" : s.ended ? "Play again" : "▶ Play"}
       </Button>
       <Button disabled={disabled} onClick={() => controller.toggleSlow()} aria-pressed={s.slow} aria-keyshortcuts="S">
         {s.slow ? "✓ Slow motion (¼)" : "Slow motion (¼)"}
       </Button>
       <Button disabled={disabled} onClick={() => controller.replay()} aria-keyshortcuts="Home">
-        ⏮ Replay
+        Replay from the start
       </Button>
       <label htmlFor={sliderId} className="sr-only">
         Moment of the run
@@ -81,7 +81,7 @@ export function MeasuredReadout({ controller, recording, quantity, unit, label }
   return (
     <div aria-live={s.ended ? "polite" : "off"}>
       <p className="text-[max(1rem,2.6vh)] text-ink-muted">{label}</p>
-      <p className="font-mono text-[max(2rem,6vh)] font-bold leading-tight tabular-nums">{body}</p>
+      <p className="whitespace-nowrap font-mono text-[max(1.8rem,5vh)] font-bold leading-tight tabular-nums">{body}</p>
       <p className="text-[max(0.9rem,2vh)] text-ink-muted">{note}</p>
     </div>
   );

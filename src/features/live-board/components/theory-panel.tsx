@@ -83,13 +83,13 @@ export function TheoryPanel({ rig, params, theory, unit, coefficients, className
             {t.budget ? (
               <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5">
                 <dt>Released by the falling chain</dt>
-                <dd className="font-mono">{watts(t.budget.released)}</dd>
+                <dd className="whitespace-nowrap font-mono">{watts(t.budget.released)}</dd>
                 <dt>Carried as kinetic energy</dt>
-                <dd className="font-mono">{watts(t.budget.kineticFlux)}</dd>
+                <dd className="whitespace-nowrap font-mono">{watts(t.budget.kineticFlux)}</dd>
                 <dt>Lost where links leave the pile</dt>
-                <dd className="font-mono">{watts(t.budget.lostAtPile)}</dd>
+                <dd className="whitespace-nowrap font-mono">{watts(t.budget.lostAtPile)}</dd>
                 <dt>Lost where links land on the floor</dt>
-                <dd className="font-mono">{watts(t.budget.lostAtFloor)}</dd>
+                <dd className="whitespace-nowrap font-mono">{watts(t.budget.lostAtFloor)}</dd>
               </dl>
             ) : (
               <p className="text-warn">{t.budgetProblem}</p>
@@ -105,8 +105,8 @@ export function TheoryPanel({ rig, params, theory, unit, coefficients, className
         <p className="text-ink-muted">The theory value appears once the set-up is saved.</p>
       )}
       {notes.length > 0 ? (
-        <details open={rig === "fountain"}>
-          <summary className="min-h-touch cursor-pointer font-bold">About this simulation</summary>
+        <details>
+          <summary className="min-h-touch cursor-pointer font-bold">About this simulation (how the pile was calibrated)</summary>
           <ul className="mt-1 grid list-disc gap-2 pl-5 text-ink-muted">
             {notes.map((note) => (
               <li key={note.slice(0, 40)}>{note === CALIBRATED_PILE_NOTE ? <strong className="text-ink">Calibrated: </strong> : null}{note}</li>
