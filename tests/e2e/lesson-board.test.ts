@@ -106,6 +106,21 @@ beforeAll(async () => {
       ack({ data: { phase } });
       changed();
     });
+    socket.on("trial:setup", ({ trialId, ...setup }, ack) => {
+      const links = (setup.params as { links?: number } | undefined)?.links;
+      // A refusal only the server knows about (a stand-in rule), so the field message comes from the ack.
+      if (links !== undefined && links > 3000) {
+        return ack({ error: { code: "validation_failed", message: "Check the set-up.", fields: { "params.links": ["Stand-in rule: at most 3000 links here"] } } });
+      }
+      state = { ...state, trials: state.trials.map((t) => (t.id === trialId ? { ...t, params: setup.params ?? {}, question: setup.question as TeacherTrial["question"] } : t)) };
+      ack({ data: { trialId } });
+      changed();
+    });
+    socket.on("explanation:show", ({ explanationId, shown }, ack) => {
+      state = { ...state, trials: state.trials.map((t) => ({ ...t, explanations: t.explanations.map((x) => (x.id === explanationId ? { ...x, shown } : x)) })) };
+      ack({ data: { explanationId } });
+      changed();
+    });
     socket.on("trial:result", (payload: TrialResultInput, ack) => {
       state = { ...state, trials: state.trials.map((t) => (t.id === payload.trialId ? { ...t, seed: payload.seed, measured: payload.measured as TeacherTrial["measured"], ranAt: new Date().toISOString() } : t)) };
       ack({ data: { trialId: payload.trialId } });
@@ -166,4 +181,44 @@ describe("the lesson board (against a stand-in server)", () => {
     expect(problems).toEqual([]);
     await page.context().close();
   }, 200_000);
+
+  it("the remote works on a phone: 44 px targets, set-up sent debounced with the server's message beside the field, names only here, Run moves the phase", async () => {
+    state = { ...structuredClone(lesson), trials: [{ ...structuredClone(trial), phase: "setup" }] };
+    received.length = 0;
+    const { page, problems } = await watchedPage(browser, base, { width: 390, height: 844 });
+    await page.goto(`${base}/lessons/${LESSON_ID}/remote`);
+    await page.getByRole("heading", { name: /remote/ }).waitFor({ timeout: 30_000 });
+
+    // Every button is at least 44 px tall.
+    const heights = await page.getByRole("button").evaluateAll((els) => els.filter((el) => (el as HTMLElement).offsetParent !== null).map((el) => el.getBoundingClientRect().height));
+    expect(heights.length).toBeGreaterThan(3);
+    expect(Math.min(...heights)).toBeGreaterThanOrEqual(44);
+
+    // The explanation carries its author's name here (never on the board unless turned on).
+    await page.getByText("Zed Q.").waitFor();
+
+    // A set-up change is sent once, after the typing stops; an out-of-range value comes back beside its field.
+    const pot = page.getByLabel(/Height of the pot above the floor/);
+    await pot.fill("1.5");
+    await expect.poll(() => received.filter((r) => r.event === "trial:setup").length, { timeout: 5000 }).toBe(1);
+    expect((received.find((r) => r.event === "trial:setup")!.payload as { params: Record<string, unknown> }).params).toMatchObject({ potHeight: 1.5, linkShape: "rod" });
+    await pot.fill("4");
+    // Refused here already (the rig's range), without a round trip.
+    await page.getByText("Height of the pot above the floor must be from 0.2 to 3 m.").waitFor();
+    expect(received.filter((r) => r.event === "trial:setup")).toHaveLength(1);
+    await pot.fill("2");
+    await page.getByLabel(/Number of links/).fill("3500");
+    await page.getByText("Stand-in rule: at most 3000 links here").waitFor({ timeout: 5000 });
+    expect(await page.getByLabel(/Number of links/).getAttribute("aria-invalid")).toBe("true");
+
+    await page.getByRole("button", { name: "Show on the board" }).click();
+    await expect.poll(() => received.filter((r) => r.event === "explanation:show").map((r) => r.payload)).toEqual([{ explanationId: trial.explanations[0]!.id, shown: true }]);
+    await page.getByText("On the board", { exact: true }).waitFor();
+
+    await page.getByRole("button", { name: /Run \(closes predictions\)/ }).click();
+    await expect.poll(() => received.filter((r) => r.event === "trial:phase").map((r) => r.payload)).toEqual([{ trialId: TRIAL_ID, phase: "observe" }]);
+    await keepScreenshot(page, "lesson-board", "remote");
+    expect(problems).toEqual([]);
+    await page.context().close();
+  }, 120_000);
 });
