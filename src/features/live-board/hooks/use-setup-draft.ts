@@ -45,12 +45,10 @@ export function useSetupDraft(trial: TeacherTrial, send: Send): SetupDraftHandle
     setStatus("saved");
     setDraft(fromTrial());
     // Only on a new trial; the next effect follows the server's changes to this one.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [trialId]);
 
   useEffect(() => {
     if (!dirty.current) setDraft(fromTrial());
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [fromTrial]);
 
   useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);

@@ -110,7 +110,6 @@ export function useTrialSimulation(trial: SimulatedTrial | null, options: { maxS
     setState((s) => ({ ...s, progress: 0 }));
     w.postMessage({ type: "run", job: id, ...base, maxSeconds } satisfies SimRequest);
     // trial's fields are all in `key`.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [key, running, maxSeconds]);
 
   return state;

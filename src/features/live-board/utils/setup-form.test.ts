@@ -53,6 +53,15 @@ describe("from the form to trial:setup", () => {
     expect(errors["params.lambda"]).toBe("Type a number.");
   });
 
+  it("keeps the fountain's α and β at 0.5 or less (its theory refuses more, though the range allows up to 0.6)", () => {
+    const draft = draftForRig("fountain");
+    draft.params.theoryAlpha = "0.55";
+    expect(setupPayload(draft).errors["params.theoryAlpha"]).toMatch(/0.5 or less/);
+    draft.params.theoryAlpha = "0.5";
+    draft.params.theoryBeta = "0.4";
+    expect(setupPayload(draft).errors).toEqual({});
+  });
+
   it("a choice question sends its choices with optional ranges, and needs at least two", () => {
     const draft = draftForRig("fountain");
     draft.question = { ...draft.question, kind: "choice", choices: [{ label: "Below the rim", min: "", max: "0" }] };
