@@ -19,6 +19,8 @@ interface HarnessApi {
   elements: number;
   /** Draws the chain at time t (s) and returns the drawing time, ms. */
   drawAt(t: number): number;
+  /** How many elements are drawn (not hidden) at time t. */
+  drawnAt(t: number): number;
 }
 
 declare global {
@@ -56,6 +58,13 @@ function Harness() {
         frameAt(recording, t, buffer);
         const index = Math.min(recording.movingShapes.length - 1, Math.round(t * recording.frameRate));
         return stage.current.draw(buffer, index >= 0 ? recording.movingShapes[index]! : []);
+      },
+      drawnAt(t) {
+        if (!recording) return 0;
+        const frame = frameAt(recording, t);
+        let drawn = 0;
+        for (let i = 0; i < frame.length; i += 3) if (!Number.isNaN(frame[i]!)) drawn++;
+        return drawn;
       },
     };
   }, [recording, sim.error, sim.preview]);
