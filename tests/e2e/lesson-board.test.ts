@@ -78,6 +78,7 @@ let base = "";
 let browser: Browser;
 const received: { event: string; payload: unknown }[] = [];
 let state: TeacherLesson = structuredClone(lesson);
+let signedIn = true;
 
 beforeAll(async () => {
   const clientDir = inject("clientDir");
@@ -85,7 +86,7 @@ beforeAll(async () => {
     const path = (req.url ?? "/").split("?")[0]!;
     if (path === "/api/session") {
       res.writeHead(200, { "content-type": "application/json" });
-      return void res.end(JSON.stringify({ user: me, notice: null, demo: false }));
+      return void res.end(JSON.stringify({ user: signedIn ? me : null, notice: null, demo: false }));
     }
     const file = join(clientDir, normalize(decodeURIComponent(path)).replace(/^(\.\.[/\\])+/, ""));
     const target = file.startsWith(clientDir) && existsSync(file) && extname(file) ? file : join(clientDir, "index.html");
@@ -221,4 +222,17 @@ describe("the lesson board (against a stand-in server)", () => {
     expect(problems).toEqual([]);
     await page.context().close();
   }, 120_000);
+
+  it("someone signed out who opens the board is sent to sign in, with the board as the page to come back to", async () => {
+    signedIn = false;
+    try {
+      const { page } = await watchedPage(browser, base);
+      await page.goto(`${base}/lessons/${LESSON_ID}/board`);
+      await page.waitForURL((url) => url.pathname === "/sign-in", { timeout: 15_000 });
+      expect(new URL(page.url()).searchParams.get("returnTo")).toBe(`/lessons/${LESSON_ID}/board`);
+      await page.context().close();
+    } finally {
+      signedIn = true;
+    }
+  }, 60_000);
 });
