@@ -117,6 +117,11 @@ beforeAll(async () => {
       ack({ data: { trialId } });
       changed();
     });
+    socket.on("trial:show", ({ trialId }, ack) => {
+      state = { ...state, currentTrialId: trialId };
+      ack({ data: { trialId } });
+      changed();
+    });
     socket.on("explanation:show", ({ explanationId, shown }, ack) => {
       state = { ...state, trials: state.trials.map((t) => ({ ...t, explanations: t.explanations.map((x) => (x.id === explanationId ? { ...x, shown } : x)) })) };
       ack({ data: { explanationId } });
@@ -184,7 +189,8 @@ describe("the lesson board (against a stand-in server)", () => {
   }, 200_000);
 
   it("the remote works on a phone: 44 px targets, set-up sent debounced with the server's message beside the field, names only here, Run moves the phase", async () => {
-    state = { ...structuredClone(lesson), trials: [{ ...structuredClone(trial), phase: "setup" }] };
+    const second = { ...structuredClone(trial), id: "6a7b8c9d-0e1f-4a2b-8c3d-4e5f6a7b8c9d", rig: "hanging" as const, rigLabel: "Hanging chain", explanations: [] };
+    state = { ...structuredClone(lesson), trials: [{ ...structuredClone(trial), phase: "setup" }, second] };
     received.length = 0;
     const { page, problems } = await watchedPage(browser, base, { width: 390, height: 844 });
     await page.goto(`${base}/lessons/${LESSON_ID}/remote`);
@@ -219,6 +225,12 @@ describe("the lesson board (against a stand-in server)", () => {
     await page.getByRole("button", { name: /Run \(closes predictions\)/ }).click();
     await expect.poll(() => received.filter((r) => r.event === "trial:phase").map((r) => r.payload)).toEqual([{ trialId: TRIAL_ID, phase: "observe" }]);
     await keepScreenshot(page, "lesson-board", "remote");
+
+    // Another trial can be put on the board.
+    await page.getByLabel("Trial everyone sees").selectOption(second.id);
+    await expect.poll(() => received.filter((r) => r.event === "trial:show").map((r) => r.payload)).toEqual([{ lessonId: LESSON_ID, trialId: second.id }]);
+    // The choice stays only because the server's new view names the second trial as current.
+    await expect.poll(() => page.getByLabel("Trial everyone sees").inputValue()).toBe(second.id);
     expect(problems).toEqual([]);
     await page.context().close();
   }, 120_000);

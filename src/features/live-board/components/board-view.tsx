@@ -334,7 +334,7 @@ function TeacherAside({ lesson, trial, send, panel, onRun, children }: {
       </Button>
       {panel.open ? (
         <div className="mt-3 grid gap-6">
-          <LessonControls lessonId={lesson.id} trial={trial} showNames={lesson.showNames} send={send} onRun={onRun} />
+          <LessonControls lessonId={lesson.id} trial={trial} trials={lesson.trials} showNames={lesson.showNames} send={send} onRun={onRun} />
           {children}
           {trial ? (
             <section aria-labelledby="board-explanations" className="grid gap-2">

@@ -3,6 +3,7 @@ import type { TeacherTrial } from "@contracts/lessons";
 import { TRIAL_PHASE_LABELS, type TrialPhase } from "@contracts/lesson-rules";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";
+import { CONTROL_CLASSES } from "@/components/ui/field";
 import { PlusIcon, WarnIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
 import { errorMessage } from "@/lib/api-client";
@@ -14,9 +15,11 @@ import { nextPhaseOf, runNeedsPhaseChange } from "../utils/phases";
  * Lesson and trial commands for the board's side panel and the remote: phases, run, a new
  * trial, names on the board, and ending the lesson (asked first).
  */
-export function LessonControls({ lessonId, trial, showNames, send, onRun, size = "md", className }: {
+export function LessonControls({ lessonId, trial, trials = [], showNames, send, onRun, size = "md", className }: {
   lessonId: string;
   trial: TeacherTrial | null;
+  /** All the lesson's trials, to show another one. */
+  trials?: readonly TeacherTrial[];
   showNames: boolean;
   send: Send;
   /** Play the run on this device too (the board); the remote only moves the phase. */
@@ -91,6 +94,26 @@ export function LessonControls({ lessonId, trial, showNames, send, onRun, size =
         <Notice tone="danger" live="alert">
           <p>{errorMessage(error)}</p>
         </Notice>
+      ) : null}
+      {trials.length > 1 ? (
+        <label className="grid gap-1.5 font-bold">
+          Trial everyone sees
+          <select
+            className={CONTROL_CLASSES}
+            value={trial?.id ?? ""}
+            disabled={busy === "show"}
+            onChange={(e) => {
+              const trialId = e.target.value;
+              void act("show", () => send("trial:show", { lessonId, trialId }));
+            }}
+          >
+            {trials.map((t, i) => (
+              <option key={t.id} value={t.id}>
+                {i + 1}. {t.rigLabel} ({TRIAL_PHASE_LABELS[t.phase]})
+              </option>
+            ))}
+          </select>
+        </label>
       ) : null}
       <div className="grid gap-1">
         <label className="flex min-h-touch items-center gap-3 font-bold">

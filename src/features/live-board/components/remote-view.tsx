@@ -49,7 +49,7 @@ export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tally
           {trial.phase === "predict" || trial.phase === "revote" ? <span className="block">{trial.answered[trial.phase === "revote" ? 2 : 1]} answered</span> : null}
         </p>
       ) : null}
-      <LessonControls lessonId={lesson.id} trial={trial} showNames={lesson.showNames} send={send} size="lg" />
+      <LessonControls lessonId={lesson.id} trial={trial} trials={lesson.trials} showNames={lesson.showNames} send={send} size="lg" />
       {trial ? <RemoteTrial key={trial.id} lessonId={lesson.id} trial={trial} send={send} /> : null}
       {tallyPanel ? <section aria-label="Show of hands">{tallyPanel}</section> : null}
     </div>
