@@ -1,7 +1,7 @@
 import { createBrowserRouter } from "react-router";
 import { RouteErrorBoundary } from "@/components/errors/route-error-boundary";
 import { LoadingState } from "@/components/ui/spinner";
-import { AppShell } from "./layouts/app-shell";
+import { AppShell, BareSignedInLayout } from "./layouts/app-shell";
 import { lazyPage } from "./lazy-page";
 import { RootLayout } from "./layouts/root-layout";
 
@@ -19,6 +19,15 @@ export function createRouter() {
       children: [
         { path: "sign-in", lazy: lazyPage(() => import("./routes/sign-in")), ErrorBoundary: RouteErrorBoundary },
         { path: "sign-in/not-invited", lazy: lazyPage(() => import("./routes/not-invited")), ErrorBoundary: RouteErrorBoundary },
+        {
+          // Full screen, signed in, no header: the board on the projector and the teacher's remote.
+          Component: BareSignedInLayout,
+          ErrorBoundary: RouteErrorBoundary,
+          children: [
+            { path: "lessons/:lessonId/board", lazy: lazyPage(() => import("./routes/lesson-board")), ErrorBoundary: RouteErrorBoundary },
+            { path: "lessons/:lessonId/remote", lazy: lazyPage(() => import("./routes/lesson-remote")), ErrorBoundary: RouteErrorBoundary },
+          ],
+        },
         {
           Component: AppShell,
           ErrorBoundary: RouteErrorBoundary,

@@ -1,0 +1,71 @@
+import type { ReactNode } from "react";
+import { ErrorState } from "@/components/ui/error-state";
+import { Notice } from "@/components/ui/notice";
+import { LoadingState } from "@/components/ui/spinner";
+import { currentTrialOf, joinedCountOf } from "../api/lesson-cache";
+import { useTeacherLesson } from "../api/use-teacher-lesson";
+import { useSetupDraft } from "../hooks/use-setup-draft";
+import type { TeacherTrial } from "@contracts/lessons";
+import type { Send } from "../api/use-teacher-lesson";
+import { ConnectionStatus } from "./connection-status";
+import { ExplanationList } from "./explanation-list";
+import { LessonControls } from "./lesson-controls";
+import { PhaseSteps } from "./phase-steps";
+import { SetupPanel } from "./setup-panel";
+
+/**
+ * The teacher's remote (phone or tablet, light theme): the same commands as the board's panel
+ * without the drawing. Run moves the trial to observe; the board sees that and plays the run.
+ */
+export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tallyPanel?: ReactNode }) {
+  const { lesson, connection, refusal, send } = useTeacherLesson(lessonId);
+  if (!lesson) {
+    return refusal ? <ErrorState title="This lesson cannot be shown" error={refusal} /> : (
+      <>
+        <LoadingState label="Opening the lesson…" />
+        <ConnectionStatus connection={connection} />
+      </>
+    );
+  }
+  const trial = currentTrialOf(lesson);
+  return (
+    <div className="mx-auto grid max-w-prose gap-6 px-4 py-4">
+      <header className="grid gap-2">
+        <h1 className="text-2xl font-bold">{lesson.className}: remote</h1>
+        <p>
+          Code <span className="font-mono text-xl font-bold tracking-widest">{lesson.code}</span> · {joinedCountOf(lesson)} joined
+        </p>
+        <ConnectionStatus connection={connection} />
+        {trial ? <PhaseSteps phase={trial.phase} size="remote" /> : null}
+      </header>
+      {lesson.status === "ended" ? (
+        <Notice tone="info">
+          <p>This lesson has ended.</p>
+        </Notice>
+      ) : null}
+      {trial ? (
+        <p className="text-lg">
+          <span className="font-bold">{trial.question.prompt}</span>
+          {trial.phase === "predict" || trial.phase === "revote" ? <span className="block">{trial.answered[trial.phase === "revote" ? 2 : 1]} answered</span> : null}
+        </p>
+      ) : null}
+      <LessonControls lessonId={lesson.id} trial={trial} trials={lesson.trials} showNames={lesson.showNames} send={send} size="lg" />
+      {trial ? <RemoteTrial key={trial.id} lessonId={lesson.id} trial={trial} send={send} /> : null}
+      {tallyPanel ? <section aria-label="Show of hands">{tallyPanel}</section> : null}
+    </div>
+  );
+}
+
+function RemoteTrial({ lessonId, trial, send }: { lessonId: string; trial: TeacherTrial; send: Send }) {
+  const setup = useSetupDraft(trial, send);
+  return (
+    <>
+      <SetupPanel trial={trial} lessonId={lessonId} setup={setup} send={send} />
+      <section aria-labelledby="remote-explanations" className="grid gap-2">
+        <h2 id="remote-explanations" className="text-xl font-bold">Explanations</h2>
+        <p className="text-sm text-ink-muted">Names are shown here on your device only. The board shows the text without names.</p>
+        <ExplanationList explanations={trial.explanations} withNames send={send} />
+      </section>
+    </>
+  );
+}
