@@ -22,7 +22,8 @@ export const fountainSchema = chainSchema.extend({
   potWidth: describedNumber("Inside width of the pot", "m", 0.04, 0.4, 0.11),
   /** Pile model: how many rows on top of the pile move freely (the rest wait, frozen). */
   looseRows: describedNumber("Loose rows on top of the pile", "", 2, 12, 3, true),
-  theoryAlpha: describedNumber("Pot push α used by the theory line", "", 0, 0.6, 0.12),
+  // At most 0.5: beyond it the energy budget would have the pile giving the chain energy.
+  theoryAlpha: describedNumber("Pot push α used by the theory line", "", 0, 0.5, 0.12),
   theoryBeta: describedNumber("Floor pull β used by the theory line", "", 0, 0.4, 0),
   dt: stepSchema,
 });

@@ -2,6 +2,7 @@ import { useParams } from "react-router";
 import { LessonRemote } from "@/features/live-board/components/remote-view";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { RequireRole } from "../layouts/require-role";
+import { TallyPanel } from "../lesson/lesson-slots";
 
 /** The teacher's remote for a live lesson (phone first, light theme). */
 export function Component() {
@@ -10,8 +11,7 @@ export function Component() {
   return (
     <RequireRole roles={["teacher", "head_of_department"]} forWhom="teachers and heads of department">
       <main id="main" tabIndex={-1} className="min-h-dvh focus:outline-none">
-        {/* tallyPanel: slot for the show-of-hands form. */}
-        <LessonRemote lessonId={lessonId} tallyPanel={undefined} />
+        <LessonRemote lessonId={lessonId} tallyPanel={TallyPanel} />
       </main>
     </RequireRole>
   );

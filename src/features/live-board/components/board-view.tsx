@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState, type ReactNode } from "react";
-import type { TeacherTrial } from "@contracts/lessons";
+import type { TeacherLesson, TeacherTrial } from "@contracts/lessons";
 import { quantityOf } from "@contracts/lesson-questions";
 import { ROUND_PHASE } from "@contracts/lesson-rules";
 import { Button } from "@/components/ui/button";
@@ -30,14 +30,21 @@ import { RigStage, type RigStageHandle } from "./rig-stage";
 import { SetupPanel } from "./setup-panel";
 import { TheoryPanel } from "./theory-panel";
 
+/** What a slot is drawn from: the lesson, the trial on show, and the teacher's commands. */
+export interface SlotContext {
+  lesson: TeacherLesson;
+  trial: TeacherTrial;
+  send: Send;
+}
+
 export interface BoardSlots {
   /**
-   * SLOT: the comparison graph (predictions, simulated result and theory; across trials the
-   * class's results against the theory line). Filled by the route; nothing is drawn when absent.
+   * The comparison graph (predictions, simulated result and theory; across trials the class's
+   * results against the theory line), drawn by the route; nothing is drawn when absent.
    */
-  graphPanel?: ReactNode;
-  /** SLOT: counts from a show of hands (the tally form). */
-  tallyPanel?: ReactNode;
+  graphPanel?: (context: SlotContext) => ReactNode;
+  /** Counts from a show of hands (the tally form). */
+  tallyPanel?: (context: SlotContext) => ReactNode;
 }
 
 /** The projector view of a live lesson, for its teacher (dark board theme, full screen). */
@@ -270,8 +277,8 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
               ))}
             </dl>
           </section>
-          {graphPanel ? <section aria-label="Comparison graph">{graphPanel}</section> : null}
-          {tallyPanel ? <section aria-label="Show of hands">{tallyPanel}</section> : null}
+          {graphPanel ? <section aria-label="Comparison graph">{graphPanel({ lesson, trial, send })}</section> : null}
+          {tallyPanel ? <section aria-label="Show of hands">{tallyPanel({ lesson, trial, send })}</section> : null}
           {shown.length > 0 ? (
             <section aria-labelledby="shown-title">
               <h2 id="shown-title" className="font-bold">Explanations from the class</h2>

@@ -1,4 +1,3 @@
-import type { ReactNode } from "react";
 import { ErrorState } from "@/components/ui/error-state";
 import { Notice } from "@/components/ui/notice";
 import { LoadingState } from "@/components/ui/spinner";
@@ -12,12 +11,13 @@ import { ExplanationList } from "./explanation-list";
 import { LessonControls } from "./lesson-controls";
 import { PhaseSteps } from "./phase-steps";
 import { SetupPanel } from "./setup-panel";
+import type { BoardSlots } from "./board-view";
 
 /**
  * The teacher's remote (phone or tablet, light theme): the same commands as the board's panel
  * without the drawing. Run moves the trial to observe; the board sees that and plays the run.
  */
-export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tallyPanel?: ReactNode }) {
+export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tallyPanel?: BoardSlots["tallyPanel"] }) {
   const { lesson, connection, refusal, send } = useTeacherLesson(lessonId);
   if (!lesson) {
     return refusal ? <ErrorState title="This lesson cannot be shown" error={refusal} /> : (
@@ -51,7 +51,7 @@ export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tally
       ) : null}
       <LessonControls lessonId={lesson.id} trial={trial} trials={lesson.trials} showNames={lesson.showNames} send={send} size="lg" />
       {trial ? <RemoteTrial key={trial.id} lessonId={lesson.id} trial={trial} send={send} /> : null}
-      {tallyPanel ? <section aria-label="Show of hands">{tallyPanel}</section> : null}
+      {tallyPanel && trial ? <section aria-label="Show of hands">{tallyPanel({ lesson, trial, send })}</section> : null}
     </div>
   );
 }
