@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { choiceOfValue, codeFromPath, formatNumber, niceTicks, plotDomain, stackDots, withUnit } from "./pupil-format";
+import { choiceOfValue, codeFromPath, formatNumber, formatUncertainty, niceTicks, plotDomain, stackDots, withUnit } from "./pupil-format";
 import { latestPrediction, mergeMine, readStoredLesson, storageKey, writeStoredLesson, type StoredLesson } from "./pupil-storage";
 
 describe("lesson code in the address", () => {
@@ -100,5 +100,14 @@ describe("storage on the device", () => {
     expect(merged.predictions.map((x) => x.clientId)).toEqual(["a", "b"]);
     expect(latestPrediction(merged, "t", 1)?.value).toBe(2);
     expect(latestPrediction(merged, "t", 2)).toBeNull();
+  });
+});
+
+describe("formatUncertainty", () => {
+  it("keeps one significant figure", () => {
+    expect(formatUncertainty(0.635)).toBe("0.6");
+    expect(formatUncertainty(0.0049)).toBe("0.005");
+    expect(formatUncertainty(12)).toBe("10");
+    expect(formatUncertainty(0)).toBe("0");
   });
 });

@@ -25,6 +25,13 @@ export function formatNumber(value: number): string {
 
 export const withUnit = (value: number, unit: string) => (unit ? `${formatNumber(value)} ${unit}` : formatNumber(value));
 
+/** An uncertainty to one significant figure, as results are usually quoted (common practice). */
+export function formatUncertainty(value: number): string {
+  if (!Number.isFinite(value)) return "–";
+  if (value === 0) return "0";
+  return String(Number(value.toPrecision(1)));
+}
+
 /** Ticks at 1, 2 or 5 × a power of ten, covering [min, max]. */
 export function niceTicks(min: number, max: number, target = 5): number[] {
   if (!(max > min)) return [min];

@@ -6,7 +6,7 @@ import { CheckCircleIcon, ClockIcon, WarnIcon } from "@/components/ui/icons";
 import { cx } from "@/lib/cx";
 import { AnswerPlot } from "./answer-plot";
 import type { PupilClient, PupilState } from "./pupil-client";
-import { withUnit } from "./pupil-format";
+import { formatUncertainty, withUnit } from "./pupil-format";
 import { latestExplanation, latestPrediction, type OutboxEntry } from "./pupil-storage";
 import { CARD, pupilButton } from "./pupil-ui";
 import { RigSketch } from "./rig-sketch";
@@ -284,7 +284,7 @@ function ResultPanel({ state, trial }: { state: PupilState; trial: PublicTrial }
     ...(second ? [{ label: "Your second prediction", text: answerText(question, second), testId: "compare-own-2" }] : []),
     {
       label: "Result of the run",
-      text: `${withUnit(result.value, result.unit)}${result.uncertainty ? ` ± ${withUnit(result.uncertainty, result.unit)}` : ""}`,
+      text: `${withUnit(result.value, result.unit)}${result.uncertainty ? ` ± ${formatUncertainty(result.uncertainty)}${result.unit ? ` ${result.unit}` : ""}` : ""}`,
       testId: "compare-result",
     },
     ...(trial.theory ? [{ label: "Theory", text: withUnit(trial.theory.value, trial.theory.unit), testId: "compare-theory" }] : []),

@@ -263,6 +263,7 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
           {recording && trial.phase !== "setup" && trial.phase !== "predict" ? (
             <MeasuredReadout controller={controller} recording={recording} quantity={question.quantity} unit={question.unit} label={quantity?.label ?? "Measured"} />
           ) : null}
+          {graphPanel ? <section aria-label="Comparison graph">{graphPanel({ lesson, trial, send })}</section> : null}
           <section aria-labelledby="params-title">
             <h2 id="params-title" className="font-bold">Set-up</h2>
             <dl className="grid grid-cols-[auto_1fr] gap-x-4">
@@ -277,7 +278,6 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
               ))}
             </dl>
           </section>
-          {graphPanel ? <section aria-label="Comparison graph">{graphPanel({ lesson, trial, send })}</section> : null}
           {tallyPanel ? <section aria-label="Show of hands">{tallyPanel({ lesson, trial, send })}</section> : null}
           {shown.length > 0 ? (
             <section aria-labelledby="shown-title">
