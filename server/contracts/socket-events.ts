@@ -92,7 +92,7 @@ export interface SocketData {
   staffId: string | null;
   sessionId: string | null;
   /** Set once a pupil's device has joined a lesson. */
-  participant: { id: string; lessonId: string } | null;
+  participant: { id: string; lessonId: string; displayName: string } | null;
 }
 
 /** Rooms: a staff connection joins its session and staff rooms; lessons have a public and a teacher room. */

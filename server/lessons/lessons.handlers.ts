@@ -30,6 +30,9 @@ type Ack = (reply: AckReply<unknown>) => void;
 /** What a handler returns: the acknowledgement's data, and what to broadcast once it has been sent. */
 type Outcome = { data: unknown; after?: () => Promise<void> };
 
+/** Joins and departures within this window share one rebuilt teacher view. */
+const TEACHER_VIEW_COALESCE_MS = 150;
+
 /** At most this many refusal rows per socket: a misbehaving device cannot flood the audit log. */
 const AUDIT_ROWS_PER_SOCKET = 20;
 
@@ -72,10 +75,26 @@ export function createLessonLive({ io, db, publicUrl, log, onEnded }: LessonLive
     );
   }
 
+  /**
+   * The teacher's list of who is here, after joins and departures. A class joining at once would
+   * otherwise rebuild the whole view once per pupil: changes within a short window share one.
+   */
+  const pendingTeacherViews = new Set<string>();
+  function refreshTeacherView(lessonId: string) {
+    if (pendingTeacherViews.has(lessonId)) return;
+    pendingTeacherViews.add(lessonId);
+    setTimeout(() => {
+      pendingTeacherViews.delete(lessonId);
+      teacherView(lessonId)
+        .then((view) => io.to(rooms.lessonTeacher(lessonId)).emit("lesson:teacher-changed", view))
+        .catch((error) => log("[lessons] teacher view after joins failed", error));
+    }, TEACHER_VIEW_COALESCE_MS);
+  }
+
   async function participantsChanged(lessonId: string) {
     const count = await repo.countParticipants(db, lessonId);
     io.to(rooms.lesson(lessonId)).emit("participants:counted", { lessonId, count });
-    io.to(rooms.lessonTeacher(lessonId)).emit("lesson:teacher-changed", await teacherView(lessonId));
+    refreshTeacherView(lessonId);
   }
 
   function register(socket: IoSocket) {
@@ -133,13 +152,13 @@ export function createLessonLive({ io, db, publicUrl, log, onEnded }: LessonLive
       const lessonId = session.lesson.id;
       const previous = socket.data.participant;
       if (previous && previous.lessonId !== lessonId) await socket.leave(rooms.lesson(previous.lessonId));
-      socket.data.participant = { id: session.participant.id, lessonId };
+      socket.data.participant = { id: session.participant.id, lessonId, displayName: session.participant.displayName };
       await socket.join(rooms.lesson(lessonId));
       return {
         data: session,
         after: async () => {
           if (isNew) await participantsChanged(lessonId);
-          else io.to(rooms.lessonTeacher(lessonId)).emit("lesson:teacher-changed", await teacherView(lessonId));
+          else refreshTeacherView(lessonId);
         },
       };
     });
@@ -234,9 +253,7 @@ export function createLessonLive({ io, db, publicUrl, log, onEnded }: LessonLive
       const participant = socket.data.participant;
       if (!participant) return;
       // The teacher's list shows who is online; the public count is of everyone who joined.
-      void teacherView(participant.lessonId)
-        .then((view) => io.to(rooms.lessonTeacher(participant.lessonId)).emit("lesson:teacher-changed", view))
-        .catch((error) => log("[lessons] broadcast after disconnect failed", error));
+      refreshTeacherView(participant.lessonId);
     });
   }
 

@@ -33,7 +33,13 @@ import { publicLesson, type ExplanationRow, type PredictionRow, type TrialRow } 
 /** Who is on the other end of a socket: a signed-in member of staff, a joined pupil's device, or neither yet. */
 export interface SocketWho {
   staffId: string | null;
-  participant: { id: string; lessonId: string } | null;
+  /** `displayName` as joined, kept on the socket so an answer needs no extra query for it. */
+  participant: { id: string; lessonId: string; displayName?: string } | null;
+}
+
+async function participantName(db: Db, participantId: string): Promise<string> {
+  const [p] = await db.select({ displayName: lessonParticipants.displayName }).from(lessonParticipants).where(eq(lessonParticipants.id, participantId));
+  return p?.displayName ?? "";
 }
 
 /**
@@ -428,10 +434,16 @@ async function trialForPupil(db: Db, who: SocketWho, trialId: string) {
 
 /** Locks the trial and its lesson for this transaction, so a phase change waits for an answer in flight and vice versa. */
 async function lockOpenTrial(tx: repo.Tx, trialId: string) {
-  const [trial] = await tx.select().from(trials).where(eq(trials.id, trialId)).for("share");
-  const [lesson] = await tx.select().from(lessons).where(eq(lessons.id, trial!.lessonId)).for("share");
-  if (lesson!.status !== "open") throw lessonEnded();
-  return { trial: trial!, lesson: lesson! };
+  // One query locks both rows: answers arrive in bursts, and every round trip counts.
+  const [row] = await tx
+    .select({ trial: trials, lesson: lessons })
+    .from(trials)
+    .innerJoin(lessons, eq(lessons.id, trials.lessonId))
+    .where(eq(trials.id, trialId))
+    .for("share");
+  if (!row) throw trialNotFound();
+  if (row.lesson.status !== "open") throw lessonEnded();
+  return row;
 }
 
 export type StoredAnswer = { clientId: string; storedAt: string };
@@ -449,12 +461,17 @@ export async function submitPrediction(
   const participant = requireParticipant(who);
   const stored = await findStoredPrediction(db, participant.id, input.clientId);
   if (stored) return { stored, row: null, displayName: null, lessonId: participant.lessonId };
-  const { trial } = await trialForPupil(db, who, input.trialId);
-  checkAnswerFits(trial, input);
 
   try {
     const row = await db.transaction(async (tx) => {
-      const locked = await lockOpenTrial(tx, trial.id);
+      // The trial is read under its lock: whose lesson it is, its question and its phase, at once.
+      const locked = await lockOpenTrial(tx, input.trialId);
+      const trial = locked.trial;
+      if (trial.lessonId !== participant.lessonId) {
+        const head = await repo.findLessonWithClass(tx, trial.lessonId);
+        throw new RefusedError(head!.schoolId, trial.lessonId, "other_lesson", "You can only answer in the lesson you joined.");
+      }
+      checkAnswerFits(trial, input);
       if (locked.lesson.currentTrialId !== trial.id || locked.trial.phase !== ROUND_PHASE[input.round as Round]) {
         throw new AppError(
           "phase_closed",
@@ -480,11 +497,8 @@ export async function submitPrediction(
         .returning();
       return saved!;
     });
-    const [p] = await db
-      .select({ displayName: lessonParticipants.displayName })
-      .from(lessonParticipants)
-      .where(eq(lessonParticipants.id, participant.id));
-    return { stored: { clientId: row.clientId, storedAt: row.updatedAt.toISOString() }, row, displayName: p?.displayName ?? "", lessonId: trial.lessonId };
+    const displayName = participant.displayName ?? (await participantName(db, participant.id));
+    return { stored: { clientId: row.clientId, storedAt: row.updatedAt.toISOString() }, row, displayName, lessonId: participant.lessonId };
   } catch (error) {
     // The same client id arrived twice at once: the other copy was stored.
     if (isUniqueViolation(error, "predictions_participant_client_key")) {

@@ -18,6 +18,7 @@ import { io as connect, type Socket } from "socket.io-client";
 import type { TeacherLesson } from "../../server/contracts/lessons";
 import { PROTOCOL_VERSION } from "../../server/contracts/protocol";
 import type { AckReply, ClientToServerEvents, ServerToClientEvents } from "../../server/contracts/socket-events";
+import { stopCluster } from "../../server/devstack/postgres";
 import { projectPath } from "../../server/paths";
 import { HttpAgent, signIn } from "../support/http-agent";
 
@@ -148,6 +149,8 @@ function waitFor(check: () => boolean, timeoutMs: number): Promise<boolean> {
 }
 
 async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: number }> {
+  // A cluster left running by an interrupted run would outlive its deleted folder.
+  await stopCluster(join(DATA_DIR, "postgres"));
   rmSync(DATA_DIR, { recursive: true, force: true });
   const [port, pgPort, signInPort, smtpPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
   const url = `http://127.0.0.1:${port}`;
@@ -172,6 +175,7 @@ async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: num
     const trialIds: string[] = [];
     const boardSeen = new Map<string, number>();
     const codes: string[] = [];
+    const participantsSeen = new Map<string, number>();
     for (let i = 0; i < LESSONS; i++) {
       const created = await teacher.post("/api/classes", { name: `Bench class ${i + 1}`, yearGroup: "Year 10", subject: "Physics" });
       const { id: classId } = (await created.json()) as { id: string };
@@ -183,6 +187,7 @@ async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: num
       const lesson: TeacherLesson = await ask(board.emitWithAck("lesson:watch", { lessonId }));
       const trialId = lesson.currentTrialId!;
       await ask(board.emitWithAck("trial:phase", { trialId, phase: "predict" }));
+      board.on("lesson:teacher-changed", (view) => participantsSeen.set(lessonId, view.participants.length));
       board.on("prediction:added", ({ prediction }) => {
         // Keyed by the pupil's id: each pupil sends once, and the board view carries no client id.
         boardSeen.set(prediction.participantId, performance.now());
@@ -203,6 +208,9 @@ async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: num
         }),
       );
     }
+    // As in a classroom, pupils have joined (and each board has its list) before predictions open.
+    const listed = await waitFor(() => lessonIds.every((id) => (participantsSeen.get(id) ?? 0) >= PUPILS), 30_000);
+    if (!listed) console.error("  not every board listed all its pupils within 30 s");
     // Map client ids to participants so board arrivals (by participant) can be matched.
     const participantOf = new Map<string, string>();
     const seenByClient = new Map<string, number>();
@@ -239,6 +247,8 @@ async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: num
   } finally {
     for (const s of sockets) s.close();
     await stopChild(child);
+    // tsx may exit before the server has stopped its Postgres: make sure it is down.
+    await stopCluster(join(DATA_DIR, "postgres"));
   }
 }
 
