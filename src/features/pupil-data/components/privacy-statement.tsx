@@ -35,8 +35,13 @@ export function PrivacyStatement() {
             measurements taken from it stay). Bench data itself (pot heights, rises, speeds, notes) holds nothing about pupils.
           </li>
           <li>
-            <strong>With live lessons</strong> (being built): a display name for each lesson, typed by the pupil or picked from
-            the roster; each pupil’s predictions and the reasons they give; and their written explanations.
+            <strong>In live lessons</strong>: a display name for each lesson, typed by the pupil or picked from the roster; each
+            pupil’s predictions and the reasons they give; and their written explanations.
+          </li>
+          <li>
+            <strong>On the pupil’s own device</strong>, in the browser’s storage for that lesson only: a random token that lets
+            the same device rejoin as the same pupil after a reload or a dropped connection, the name they joined with, and their
+            own answers until the server has confirmed them. It is cleared when the lesson ends.
           </li>
         </ul>
         <p className="mt-4 max-w-prose">
@@ -67,7 +72,7 @@ export function PrivacyStatement() {
       <Section title="Who can see it">
         <ul className="grid max-w-prose list-disc gap-2 pl-6">
           <li>The class’s own teacher, who can change and delete it.</li>
-          <li>The head of the class’s department can look at the class and its roster without changing them; for lessons, they will see totals, not individual pupils’ answers.</li>
+          <li>The head of the class’s department can look at the class and its roster without changing them; for lessons, they see how many trials were run and how many pupils took part, not individual pupils’ answers.</li>
           <li>School admins see how many names each class holds, never the names, and can delete a class’s pupil data.</li>
           <li>Nobody outside the school: it stays in the school’s own Linkleap database.</li>
         </ul>
@@ -88,9 +93,10 @@ export function PrivacyStatement() {
               </span>
             </p>
             <p>
-              A deletion job runs every night. Today it deletes the roster names of classes that have been archived for longer
-              than that: a class still in use keeps its roster. When live lessons arrive, pupils’ lesson names, predictions,
-              reasons and explanations are deleted the same way, counted from the end of their lesson.
+              A deletion job runs every night. It deletes pupils’ lesson names, predictions, reasons and explanations once that
+              long has passed since their lesson started, and the roster names of classes that have been archived for longer
+              than that: a class still in use keeps its roster. The lessons themselves stay, with their set-ups and simulated
+              results, but without anything about a pupil.
             </p>
             <p>
               {retention.data.lastRun
