@@ -1,5 +1,5 @@
 /**
- * Every class, bench-data, department, staff, invitation, pupil-data and captured-mail route against every
+ * Every class, bench-data, live-lesson, department, staff, invitation, pupil-data and captured-mail route against every
  * kind of caller. Teacher A owns the
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
@@ -124,6 +124,10 @@ const ROUTES: RouteCase[] = [
     path: (f) => `/api/classes/${f.classA}/bench-photos/${made.benchPhotoId}`,
     expected: ownerOnly(204),
   },
+  { route: "POST /api/classes/:id/lessons", method: "POST", path: (f) => `/api/classes/${f.classA}/lessons`, body: () => ({}), expected: ownerOnly(201) },
+  { route: "GET /api/classes/:id/lessons", method: "GET", path: (f) => `/api/classes/${f.classA}/lessons`, expected: readable },
+  { route: "GET /api/lessons/open", method: "GET", path: () => "/api/lessons/open", expected: anyTeacher(200) },
+  { route: "POST /api/lessons/:id/end", method: "POST", path: () => `/api/lessons/${made.lessonId}/end`, expected: ownerOnly(200) },
   {
     route: "GET /api/department/classes",
     method: "GET",
@@ -197,8 +201,8 @@ const ROUTES: RouteCase[] = [
 
 const ctx = useTestStack(seedFixture);
 const agents = new Map<Caller, HttpAgent>();
-/** Bench data teacher A makes before the matrix runs: a typed run and an uploaded photo. */
-const made = { benchRunId: "", benchPhotoId: "" };
+/** What teacher A makes before the matrix runs: a typed run, an uploaded photo and a live lesson. */
+const made = { benchRunId: "", benchPhotoId: "", lessonId: "" };
 
 beforeAll(async () => {
   for (const caller of CALLERS) {
@@ -217,6 +221,8 @@ beforeAll(async () => {
   form.append("photo", new Blob([new Uint8Array(PNG.sync.write(png))], { type: "image/png" }), "run.png");
   const photo = await owner.request(`/api/classes/${ctx.fixture.classA}/bench-photos`, { method: "POST", body: form });
   made.benchPhotoId = ((await photo.json()) as { id: string }).id;
+  const lesson = await owner.json<{ lessonId: string }>(`/api/classes/${ctx.fixture.classA}/lessons`, { method: "POST", json: {} });
+  made.lessonId = lesson.body.lessonId;
 });
 
 describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
