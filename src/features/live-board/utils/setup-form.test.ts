@@ -53,10 +53,10 @@ describe("from the form to trial:setup", () => {
     expect(errors["params.lambda"]).toBe("Type a number.");
   });
 
-  it("keeps the fountain's α and β at 0.5 or less (its theory refuses more, though the range allows up to 0.6)", () => {
+  it("keeps the fountain's α within the range its energy budget holds for (0 to 0.5)", () => {
     const draft = draftForRig("fountain");
     draft.params.theoryAlpha = "0.55";
-    expect(setupPayload(draft).errors["params.theoryAlpha"]).toMatch(/0.5 or less/);
+    expect(setupPayload(draft).errors["params.theoryAlpha"]).toMatch(/from 0 to 0.5/);
     draft.params.theoryAlpha = "0.5";
     draft.params.theoryBeta = "0.4";
     expect(setupPayload(draft).errors).toEqual({});

@@ -115,13 +115,6 @@ export function setupPayload(draft: SetupDraft): { payload: TrialSetupInput | nu
     else if (value < field.meta.min || value > field.meta.max || (field.meta.integer && !Number.isInteger(value))) errors[`params.${field.key}`] = rangeMessage(field.meta);
     else params[field.key] = value;
   }
-  // The fountain's theory (and so its run's record) refuses these, though the ranges allow them.
-  const alpha = typeof params.theoryAlpha === "number" ? params.theoryAlpha : null;
-  const beta = typeof params.theoryBeta === "number" ? params.theoryBeta : null;
-  if (draft.rig === "fountain") {
-    if (alpha !== null && alpha > 0.5) errors["params.theoryAlpha"] = "Keep α at 0.5 or less: a pile cannot give the chain energy.";
-    if (beta !== null && beta > 0.5) errors["params.theoryBeta"] = "Keep β at 0.5 or less: the floor cannot give the chain energy.";
-  }
   const q = draft.question;
   const prompt = q.prompt.replace(/\s+/g, " ").trim();
   if (!prompt) errors["question.prompt"] = "Give the question.";
