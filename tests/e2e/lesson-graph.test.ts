@@ -9,12 +9,13 @@ import { createServer, type Server } from "node:http";
 import { extname, join } from "node:path";
 import tailwindcss from "@tailwindcss/vite";
 import react from "@vitejs/plugin-react";
-import type { Browser, Locator } from "playwright-core";
+import type { Browser } from "playwright-core";
 import { build } from "vite";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { projectPath } from "../../server/paths";
 import { keepScreenshot, launchBrowser } from "../support/browser";
 import { TEST_DATA_DIR } from "../support/paths";
+import { drawnOnCanvas } from "../support/chart-canvas";
 
 const dir = join(TEST_DATA_DIR, "lesson-graph");
 const out = join(dir, "dist");
@@ -138,22 +139,6 @@ afterAll(async () => {
   await new Promise((resolve) => server?.close(resolve));
 });
 
-type Drawn = { label: string; points: [number, number][] }[];
-
-/** What each dataset of a chart drew, and whether the canvas is painted (not transparent) at each point. */
-async function drawn(canvas: Locator) {
-  return canvas.evaluate((el) => {
-    const canvas = el as HTMLCanvasElement;
-    const sets = JSON.parse(canvas.dataset.drawn ?? "[]") as Drawn;
-    const g = canvas.getContext("2d")!;
-    const dpr = canvas.width / canvas.clientWidth;
-    return sets.map((s) => ({
-      label: s.label,
-      points: s.points.map(([x, y]) => ({ x, y, painted: g.getImageData(Math.round(x * dpr), Math.round(y * dpr), 1, 1).data[3]! > 0 })),
-    }));
-  });
-}
-
 async function openPage(theme: "light" | "board") {
   const context = await browser.newContext({ viewport: { width: 1280, height: 720 } });
   const page = await context.newPage();
@@ -169,7 +154,7 @@ describe.each(["light", "board"] as const)("lesson graphs in the %s theme", (the
   it("the comparison graph draws every answer, the result and the theory, and states the summary figures", async () => {
     const { context, page, problems } = await openPage(theme);
     const numberCanvas = page.getByTestId("number").getByTestId("trial-graph-canvas");
-    const sets = await drawn(numberCanvas);
+    const sets = await drawnOnCanvas(numberCanvas);
     const byLabel = (start: string) => sets.find((s) => s.label.startsWith(start))!;
     const predictions = byLabel("Predictions before the run (circles)");
     const result = byLabel("Simulated result 11 cm (solid line)");
@@ -208,7 +193,7 @@ describe.each(["light", "board"] as const)("lesson graphs in the %s theme", (the
     expect(await choiceSummary.getByTestId("trial-graph-summary-round-1").innerText()).toBe(
       "Before the run: 3 answers · 2 of 3 (67 %) chose the one that holds the result.",
     );
-    const bars = await drawn(page.getByTestId("choice").getByTestId("trial-graph-canvas"));
+    const bars = await drawnOnCanvas(page.getByTestId("choice").getByTestId("trial-graph-canvas"));
     expect(bars.map((b) => b.points.length)).toEqual([3, 3]);
     // The taller bar (2 answers) reaches higher up the canvas than the 1-answer bar.
     expect(bars[0]!.points[1]!.y).toBeLessThan(bars[0]!.points[0]!.y);
@@ -225,7 +210,7 @@ describe.each(["light", "board"] as const)("lesson graphs in the %s theme", (the
       "Re-vote after discussion (outlined bars)",
     ]);
 
-    const series = await drawn(page.getByTestId("fountain-series-canvas"));
+    const series = await drawnOnCanvas(page.getByTestId("fountain-series-canvas"));
     expect(series.map((s) => s.points.length)).toEqual([2, 6, 2, 1]);
     for (const s of series.slice(1)) for (const p of s.points) expect(p.painted).toBe(true);
     // The theory line passes under the simulated result at 0.8 m (10.9 cm < 11 cm: a higher y pixel).

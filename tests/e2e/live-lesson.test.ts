@@ -6,30 +6,15 @@
  * the comparison graph shows the three predictions and the result; each pupil sees their own
  * prediction beside the result. Screenshots are kept as test output.
  */
-import type { BrowserContext, Locator, Page } from "playwright-core";
+import type { BrowserContext, Page } from "playwright-core";
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import type { OpenLesson } from "../../server/contracts/lessons";
 import { predictions, trials } from "../../server/db/schema";
 import { keepScreenshot, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
+import { drawnOnCanvas } from "../support/chart-canvas";
 
 const ctx = useDemoInBrowser();
-
-type Drawn = { label: string; points: [number, number][] }[];
-
-/** What each dataset of the comparison graph drew, and whether the canvas is painted there. */
-async function drawn(canvas: Locator) {
-  return canvas.evaluate((el) => {
-    const c = el as HTMLCanvasElement;
-    const sets = JSON.parse(c.dataset.drawn ?? "[]") as Drawn;
-    const g = c.getContext("2d")!;
-    const dpr = c.width / c.clientWidth;
-    return sets.map((s) => ({
-      label: s.label,
-      points: s.points.map(([x, y]) => ({ x, y, painted: g.getImageData(Math.round(x * dpr), Math.round(y * dpr), 1, 1).data[3]! > 0 })),
-    }));
-  });
-}
 
 const PUPILS = [
   { answer: "10", reason: "It stays near the rim." },
@@ -93,7 +78,7 @@ describe("a live lesson, board and pupils", () => {
       undefined,
       { timeout: 60_000 },
     );
-    const sets = await drawn(canvas);
+    const sets = await drawnOnCanvas(canvas);
     const predicted = sets.find((s) => s.label.startsWith("Predictions before the run"))!;
     const result = sets.find((s) => s.label.startsWith("Simulated result"))!;
     expect(predicted.points).toHaveLength(3);
