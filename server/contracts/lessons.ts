@@ -85,7 +85,10 @@ export type TrialSetupInput = z.input<typeof trialSetupSchema>;
 export const startLessonInputSchema = z.object({
   /** Show pupils' names on the board for this lesson (off unless the teacher turns it on). */
   showNames: z.boolean().default(false),
+  /** Start with the trials (rig, parameters, question, in order) of one of the teacher's earlier lessons. */
+  fromLessonId: z.uuid({ error: "Pick one of your earlier lessons." }).nullable().default(null),
 });
+export type StartLessonInput = z.input<typeof startLessonInputSchema>;
 
 /** The settled value of one measured quantity, as sim/ reports it (SI). */
 export const settledSchema = z.object({

@@ -1,5 +1,5 @@
 import { createHash, randomBytes } from "node:crypto";
-import { and, eq } from "drizzle-orm";
+import { and, asc, eq } from "drizzle-orm";
 import type { z } from "zod";
 import { ParamError, RIGS, parseParams, type RigId } from "../../sim";
 import { recordAudit } from "../audit/audit.repository";
@@ -124,35 +124,45 @@ export function theoryFor(rig: RigId, params: Record<string, unknown>, seed: num
 
 // ---- HTTP: start, list, end ----
 
-async function insertLessonOnce(db: Db, actor: Actor, classId: string, showNames: boolean) {
+type TrialSetup = { rig: string; params: Record<string, unknown>; question: Question };
+
+async function insertLessonOnce(db: Db, actor: Actor, classId: string, showNames: boolean, setups: TrialSetup[]) {
   return db.transaction(async (tx) => {
     const [lesson] = await tx
       .insert(lessons)
       .values({ classId, teacherId: actor.id, code: newLessonCode(), showNames })
       .returning();
-    const [trial] = await tx
+    const made = await tx
       .insert(trials)
-      .values({
-        lessonId: lesson!.id,
-        position: 1,
-        rig: "fountain",
-        params: defaultParams("fountain"),
-        question: defaultQuestion("fountain"),
-        phase: "setup",
-      })
-      .returning({ id: trials.id });
-    await tx.update(lessons).set({ currentTrialId: trial!.id }).where(eq(lessons.id, lesson!.id));
+      .values(setups.map((setup, i) => ({ lessonId: lesson!.id, position: i + 1, ...setup, phase: "setup" as const })))
+      .returning({ id: trials.id, position: trials.position });
+    const first = made.find((t) => t.position === 1)!;
+    await tx.update(lessons).set({ currentTrialId: first.id }).where(eq(lessons.id, lesson!.id));
     return { lessonId: lesson!.id, code: lesson!.code };
   });
 }
 
-export async function startLesson(db: Db, actor: Actor, classId: string, input: { showNames: boolean }) {
+/**
+ * The trials a new lesson starts with: a fountain trial with its defaults, or the set-ups of one
+ * of this teacher's earlier lessons (any class), in order, ready to run again.
+ */
+async function startingSetups(db: Db, actor: Actor, fromLessonId: string | null): Promise<TrialSetup[]> {
+  if (!fromLessonId) return [{ rig: "fountain", params: defaultParams("fountain"), question: defaultQuestion("fountain") }];
+  const head = await repo.findLessonWithClass(db, fromLessonId);
+  if (!head || head.lesson.teacherId !== actor.id) throw new AppError("not_found", "That earlier lesson was not found among yours.");
+  const earlier = await db.select().from(trials).where(eq(trials.lessonId, fromLessonId)).orderBy(asc(trials.position));
+  if (earlier.length === 0) return startingSetups(db, actor, null);
+  return earlier.map((t) => ({ rig: t.rig, params: t.params, question: t.question }));
+}
+
+export async function startLesson(db: Db, actor: Actor, classId: string, input: { showNames: boolean; fromLessonId: string | null }) {
   const row = await classForActor(db, actor, classId, "write");
   if (row.archivedAt) throw new AppError("bad_request", "This class is archived: restore it to start a lesson.");
+  const setups = await startingSetups(db, actor, input.fromLessonId);
   // A code already in use by an open lesson: draw another (64 million codes, so this is rare).
   for (let attempt = 1; ; attempt++) {
     try {
-      return await insertLessonOnce(db, actor, classId, input.showNames);
+      return await insertLessonOnce(db, actor, classId, input.showNames, setups);
     } catch (error) {
       if (!isUniqueViolation(error, "lessons_open_code_key") || attempt >= 10) throw error;
     }

@@ -1,15 +1,19 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { StartedLesson } from "@contracts/lessons";
+import type { StartedLesson, StartLessonInput } from "@contracts/lessons";
 import { apiRequest } from "@/lib/api-client";
 import { lessonListKeys } from "./lesson-keys";
 
-export const startLesson = (classId: string) =>
-  apiRequest<StartedLesson>(`/api/classes/${encodeURIComponent(classId)}/lessons`, { method: "POST", body: { showNames: false } });
+/** Starts a lesson with one fountain trial, or with the trials of an earlier lesson of the teacher's. */
+export const startLesson = (classId: string, fromLessonId: string | null = null) =>
+  apiRequest<StartedLesson>(`/api/classes/${encodeURIComponent(classId)}/lessons`, {
+    method: "POST",
+    body: { showNames: false, fromLessonId } satisfies StartLessonInput,
+  });
 
 export function useStartLesson(classId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => startLesson(classId),
+    mutationFn: (fromLessonId: string | null = null) => startLesson(classId, fromLessonId),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: lessonListKeys.all }),
   });
 }

@@ -23,16 +23,16 @@ export function LiveLessonsSection({ item }: { item: ClassSummary }) {
   const owner = item.access === "owner";
   const canStart = owner && !item.archivedAt;
 
-  const onStart = () =>
-    start.mutate(undefined, { onSuccess: (started) => void navigate(`/lessons/${started.lessonId}/board`) });
+  const onStart = (fromLessonId: string | null = null) =>
+    start.mutate(fromLessonId, { onSuccess: (started) => void navigate(`/lessons/${started.lessonId}/board`) });
 
   return (
     <Section
       title="Live lessons"
-      description="Start a live lesson to put its board on the projector. Pupils join with the lesson code shown there."
+      description="Start a live lesson to put its board on the projector. Pupils join with the lesson code shown there. An earlier lesson's trials can be run again with the class."
       actions={
         canStart ? (
-          <Button variant="primary" busy={start.isPending} onClick={onStart}>
+          <Button variant="primary" busy={start.isPending && start.variables == null} onClick={() => onStart()}>
             Start a live lesson
           </Button>
         ) : null
@@ -56,7 +56,13 @@ export function LiveLessonsSection({ item }: { item: ClassSummary }) {
       ) : (
         <ul className="grid gap-3" aria-label="Lessons, newest first">
           {lessons.data.map((lesson) => (
-            <LessonRow key={lesson.id} lesson={lesson} owner={owner} />
+            <LessonRow
+              key={lesson.id}
+              lesson={lesson}
+              owner={owner}
+              runAgain={canStart && lesson.status === "ended" && lesson.trialCount > 0 ? () => onStart(lesson.id) : null}
+              starting={start.isPending && start.variables === lesson.id}
+            />
           ))}
         </ul>
       )}
@@ -64,7 +70,13 @@ export function LiveLessonsSection({ item }: { item: ClassSummary }) {
   );
 }
 
-function LessonRow({ lesson, owner }: { lesson: LessonListItem; owner: boolean }) {
+function LessonRow({ lesson, owner, runAgain, starting }: {
+  lesson: LessonListItem;
+  owner: boolean;
+  /** Starts a new lesson with this one's trials (set-ups and questions, no answers). */
+  runAgain: (() => void) | null;
+  starting: boolean;
+}) {
   const open = lesson.status === "open";
   return (
     <li className="flex flex-wrap items-center justify-between gap-3 rounded-control border border-line px-4 py-3">
@@ -85,6 +97,10 @@ function LessonRow({ lesson, owner }: { lesson: LessonListItem; owner: boolean }
           </ButtonLink>
           <ButtonLink to={`/lessons/${lesson.id}/remote`}>Remote</ButtonLink>
         </div>
+      ) : runAgain ? (
+        <Button busy={starting} onClick={runAgain} aria-label={`Start a new lesson with the trials of ${formatLessonDate(lesson.startedAt)}`}>
+          Start again with these trials
+        </Button>
       ) : null}
     </li>
   );
