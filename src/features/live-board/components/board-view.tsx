@@ -270,7 +270,7 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
               {trial.shownParams.map((p) => (
                 <div key={p.key} className="contents">
                   <dt className="text-ink-muted">{p.label}</dt>
-                  <dd className="font-mono font-bold">
+                  <dd className="whitespace-nowrap font-mono font-bold">
                     {p.value}
                     {p.unit ? ` ${p.unit}` : ""}
                   </dd>
