@@ -200,7 +200,7 @@ describe.each(["light", "board"] as const)("lesson graphs in the %s theme", (the
 
     const legends = await page.evaluate(() => (window as unknown as { __legends: () => { id: string; legend: string[] }[] }).__legends());
     expect(legends.find((l) => l.id === "fountain-series-canvas")!.legend).toEqual([
-      "Theory h2 = 0.136 × h1, α = 0.12, β = 0 (dashed line)",
+      "Theory 0.136 × h1 (dashed)",
       "Predictions (small circles)",
       "Simulated results (large diamonds)",
       "Real runs (triangles)",

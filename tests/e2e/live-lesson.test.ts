@@ -4,7 +4,8 @@
  * browser contexts (phone size) and predict; the board counts them without names or values;
  * the teacher runs the trial; the board's simulation (Web Worker) plays and records the result;
  * the comparison graph shows the three predictions and the result; each pupil sees their own
- * prediction beside the result. Screenshots are kept as test output.
+ * prediction beside the result; the class's real runs join the lesson's fountain graph.
+ * Screenshots are kept as test output.
  */
 import type { BrowserContext, Page } from "playwright-core";
 import { eq } from "drizzle-orm";
@@ -27,7 +28,8 @@ describe("a live lesson, board and pupils", () => {
     const teacher = await watchedPage(ctx.browser, ctx.stack.url, { width: 1600, height: 900 });
     const board = teacher.page;
     await signInAs(board, ctx.stack.url, "Tom Ashdown");
-    await board.getByRole("link", { name: /10A Physics/ }).first().click();
+    // The demo's Year 12 class has three real runs, which join the lesson's fountain graph.
+    await board.getByRole("link", { name: /12 Physics, set 1/ }).first().click();
     await board.getByRole("heading", { name: "Live lessons" }).waitFor();
     await board.getByRole("button", { name: "Start a live lesson" }).click();
     await board.waitForURL(/\/lessons\/[0-9a-f-]+\/board$/);
@@ -101,6 +103,17 @@ describe("a live lesson, board and pupils", () => {
     expect(riseCm).toBeGreaterThan(5);
     expect(riseCm).toBeLessThan(25);
     await keepScreenshot(board, "e2e", "42-live-board-result");
+
+    // Across the lesson's fountain trials: this trial's result and the class's real runs against pot height.
+    const series = board.getByTestId("fountain-series-canvas");
+    await series.scrollIntoViewIfNeeded();
+    const seriesSets = await drawnOnCanvas(series);
+    const realRuns = seriesSets.find((s) => s.label.startsWith("Real runs"))!;
+    expect(realRuns.points).toHaveLength(3);
+    for (const point of realRuns.points) expect(point.painted).toBe(true);
+    expect(seriesSets.find((s) => s.label.startsWith("Simulated results"))!.points).toHaveLength(1);
+    expect(seriesSets.find((s) => s.label.startsWith("Predictions"))!.points).toHaveLength(3);
+    await keepScreenshot(board, "e2e", "44-live-board-series");
 
     // Each pupil sees their own prediction beside the result.
     for (const [i, pupil] of pupils.entries()) {

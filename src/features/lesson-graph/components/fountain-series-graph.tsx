@@ -89,7 +89,8 @@ export function FountainSeriesGraph({ trials, unit = "cm", theory, bench = [], t
         ...(theoryLine && theory
           ? [
               {
-                label: `Theory h2 = ${theoryLine.ratio.toFixed(3)} × h1, α = ${theory.alpha}, β = ${theory.beta} (dashed line)`,
+                // Short, so it fits a legend line on the board; the summary below gives the formula.
+                label: `Theory ${theoryLine.ratio.toFixed(3)} × h1 (dashed)`,
                 data: [
                   { x: 0, y: 0 },
                   { x: xMax, y: theoryLine.end },
@@ -188,7 +189,9 @@ export function FountainSeriesGraph({ trials, unit = "cm", theory, bench = [], t
       </div>
       <figcaption id={descriptionId}>
         {trials.length} fountain {trials.length === 1 ? "trial" : "trials"}
-        {theoryLine ? `; dashed line: the steady theory, rise h2 = ${formatValue(theoryLine.ratio, "")} × pot height h1` : ""}
+        {theoryLine && theory
+          ? `; dashed line: the steady theory, rise h2 = ${formatValue(theoryLine.ratio, "")} × pot height h1 (α = ${theory.alpha}, β = ${theory.beta})`
+          : ""}
         {bench.length > 0 ? `; ${bench.length} real ${bench.length === 1 ? "run" : "runs"}` : ""}.
       </figcaption>
       <table className="sr-only">

@@ -194,10 +194,18 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
   const round = trial.phase === "revote" ? 2 : 1;
   const collecting = trial.phase === ROUND_PHASE[1] || trial.phase === ROUND_PHASE[2];
   const shown = trial.explanations.filter((x) => x.shown);
+  const afterRun = trial.phase !== "setup" && trial.phase !== "predict";
 
   return (
     <>
-      <main id="main" className="grid min-h-0 min-w-0 flex-1 grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-[2vw] p-[2vw]">
+      <main
+        id="main"
+        className={cx(
+          "grid min-h-0 min-w-0 flex-1 gap-[2vw] p-[2vw]",
+          // Once there is a result, the graphs need as much room as the drawing.
+          afterRun ? "grid-cols-[minmax(0,1fr)_minmax(0,1fr)]" : "grid-cols-[minmax(0,3fr)_minmax(0,2fr)]",
+        )}
+      >
         <div className="flex min-h-0 min-w-0 flex-col gap-3">
           {look ? (
             <RigStage
