@@ -106,3 +106,7 @@ export function parseTypedNumber(raw: string): number | null {
   const value = Number(text);
   return Number.isFinite(value) ? value : null;
 }
+
+/** What the remote can ask the board's player to do (the board plays; the remote has no drawing). */
+export const BOARD_CONTROLS = ["toggle-play", "toggle-slow", "replay"] as const;
+export type BoardControl = (typeof BOARD_CONTROLS)[number];

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { RIG_IDS } from "../../sim/rigs/rig";
 import {
+  BOARD_CONTROLS,
   LESSON_LIMITS,
   ROUNDS,
   TRIAL_PHASES,
@@ -179,6 +180,7 @@ export const movePhaseInputSchema = z.object({ trialId: z.uuid(), phase: trialPh
 export const currentTrialInputSchema = z.object({ lessonId: z.uuid(), trialId: z.uuid() });
 export const showExplanationInputSchema = z.object({ explanationId: z.uuid(), shown: z.boolean() });
 export const lessonSettingsInputSchema = z.object({ lessonId: z.uuid(), showNames: z.boolean() });
+export const boardControlInputSchema = z.object({ lessonId: z.uuid(), action: z.enum(BOARD_CONTROLS) });
 
 // ---- What clients receive (built by the server; plain types) ----
 

@@ -14,7 +14,7 @@ import type {
   TrialSetupInput,
   JoinLessonInput,
 } from "./lessons";
-import type { Round, TrialPhase } from "./lesson-rules";
+import type { BoardControl, Round, TrialPhase } from "./lesson-rules";
 
 /**
  * The one map of socket.io events, used as generics on both ends:
@@ -53,6 +53,8 @@ export interface ServerToClientEvents {
   "prediction:added": (payload: { trialId: string; prediction: TeacherPrediction }) => void;
   /** One new explanation, for the teacher to choose whether to show. */
   "explanation:added": (payload: { trialId: string; explanation: TeacherExplanation }) => void;
+  /** The remote asked the board's player to play or pause, change speed, or replay. */
+  "board:controlled": (payload: { lessonId: string; action: BoardControl }) => void;
 }
 
 export interface ClientToServerEvents {
@@ -86,6 +88,8 @@ export interface ClientToServerEvents {
   "explanation:show": (payload: { explanationId: string; shown: boolean }, ack: Ack<{ explanationId: string }>) => void;
   "lesson:settings": (payload: { lessonId: string; showNames: boolean }, ack: Ack<{ showNames: boolean }>) => void;
   "lesson:end": (payload: { lessonId: string }, ack: Ack<{ lessonId: string }>) => void;
+  /** From the remote: passed to the lesson's board (its teacher's devices only). */
+  "board:control": (payload: { lessonId: string; action: BoardControl }, ack: Ack<{ action: BoardControl }>) => void;
 }
 
 export interface SocketData {

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { fieldErrorsFromIssues } from "../contracts/errors";
 import {
   addTrialInputSchema,
+  boardControlInputSchema,
   currentTrialInputSchema,
   explanationInputSchema,
   joinLessonInputSchema,
@@ -247,6 +248,14 @@ export function createLessonLive({ io, db, publicUrl, log, onEnded }: LessonLive
       const { justEnded } = await service.endLesson(db, who(), lessonId);
       if (justEnded) onEnded?.(lessonId);
       return { data: { lessonId }, after: changes(lessonId) };
+    });
+
+    handle("board:control", boardControlInputSchema, async ({ lessonId, action }) => {
+      await service.lessonForTeacher(db, who(), lessonId, "write");
+      return {
+        data: { action },
+        after: async () => void io.to(rooms.lessonTeacher(lessonId)).emit("board:controlled", { lessonId, action }),
+      };
     });
 
     socket.on("disconnect", () => {

@@ -115,6 +115,14 @@ describe("a live lesson, board and pupils", () => {
     expect(seriesSets.find((s) => s.label.startsWith("Predictions"))!.points).toHaveLength(3);
     await keepScreenshot(board, "e2e", "44-live-board-series");
 
+    // The remote, on the teacher's phone, works the board's player.
+    const remote = await teacher.context.newPage();
+    await remote.setViewportSize({ width: 390, height: 844 });
+    await remote.goto(`${ctx.stack.url}/lessons/${lessonId}/remote`);
+    await remote.getByRole("button", { name: "Slow motion on or off" }).click();
+    await board.getByRole("button", { name: /Slow motion/, pressed: true }).waitFor();
+    await keepScreenshot(remote, "e2e", "45-live-remote");
+
     // Each pupil sees their own prediction beside the result.
     for (const [i, pupil] of pupils.entries()) {
       await pupil.page.getByRole("heading", { name: "Your prediction and the result" }).waitFor({ timeout: 30_000 });

@@ -12,7 +12,8 @@ export type LessonCommand =
   | "trial:tally"
   | "explanation:show"
   | "lesson:settings"
-  | "lesson:end";
+  | "lesson:end"
+  | "board:control";
 
 export type CommandPayload<E extends LessonCommand> = Parameters<ClientToServerEvents[E]>[0];
 export type CommandReply<E extends LessonCommand> =

@@ -1,5 +1,6 @@
 import { skipToken, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
+import type { BoardControl } from "@contracts/lesson-rules";
 import { ApiError } from "@/lib/api-client";
 import type { StaffSocket } from "@/lib/staff-socket";
 import {
@@ -28,6 +29,8 @@ export interface TeacherLessonHandle {
   /** Why the lesson could not be watched (status `refused`). */
   refusal: ApiError | null;
   send: Send;
+  /** Listens for the remote's playback requests (board:controlled); returns the way to stop. */
+  onBoardControl: (listener: (action: BoardControl) => void) => () => void;
 }
 
 /**
@@ -43,6 +46,7 @@ export function useTeacherLesson(lessonId: string): TeacherLessonHandle {
   const [connection, setConnection] = useState<LessonConnection>("connecting");
   const [refusal, setRefusal] = useState<ApiError | null>(null);
   const socketRef = useRef<StaffSocket | null>(null);
+  const controlListeners = useRef(new Set<(action: BoardControl) => void>());
 
   useEffect(() => {
     let cancelled = false;
@@ -91,6 +95,9 @@ export function useTeacherLesson(lessonId: string): TeacherLessonHandle {
         socket.on("explanation:added", (payload) => update((l) => mergeExplanation(l, payload)));
         socket.on("answers:counted", (payload) => update((l) => mergeAnswersCounted(l, payload)));
         socket.on("participants:counted", (payload) => update((l) => mergeParticipantsCounted(l, payload)));
+        socket.on("board:controlled", (payload) => {
+          if (payload.lessonId === lessonId) for (const listener of controlListeners.current) listener(payload.action);
+        });
       })
       .catch(() => {
         if (!cancelled) setConnection("unavailable");
@@ -110,5 +117,10 @@ export function useTeacherLesson(lessonId: string): TeacherLessonHandle {
     return sendCommand(socket as unknown as CommandSocket, event, payload);
   }, []);
 
-  return { lesson: query.data, connection, refusal, send };
+  const onBoardControl = useCallback((listener: (action: BoardControl) => void) => {
+    controlListeners.current.add(listener);
+    return () => void controlListeners.current.delete(listener);
+  }, []);
+
+  return { lesson: query.data, connection, refusal, send, onBoardControl };
 }

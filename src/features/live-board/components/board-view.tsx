@@ -9,7 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { LoadingState } from "@/components/ui/spinner";
 import { cx } from "@/lib/cx";
 import { currentTrialOf, joinedCountOf, type LiveTeacherLesson } from "../api/lesson-cache";
-import { useTeacherLesson, type Send } from "../api/use-teacher-lesson";
+import { useTeacherLesson, type Send, type TeacherLessonHandle } from "../api/use-teacher-lesson";
 import type { BoardAction } from "../hooks/board-keys";
 import { useBoardKeys } from "../hooks/use-board-keys";
 import { usePlaybackController } from "../hooks/use-playback";
@@ -30,6 +30,8 @@ import { RigStage, type RigStageHandle } from "./rig-stage";
 import { SetupPanel } from "./setup-panel";
 import { TheoryPanel } from "./theory-panel";
 
+type BoardControlSubscribe = TeacherLessonHandle["onBoardControl"];
+
 /** What a slot is drawn from: the lesson, the trial on show, and the teacher's commands. */
 export interface SlotContext {
   lesson: TeacherLesson;
@@ -49,11 +51,18 @@ export interface BoardSlots {
 
 /** The projector view of a live lesson, for its teacher (dark board theme, full screen). */
 export function LessonBoard({ lessonId, graphPanel, tallyPanel }: { lessonId: string } & BoardSlots) {
-  const { lesson, connection, refusal, send } = useTeacherLesson(lessonId);
+  const { lesson, connection, refusal, send, onBoardControl } = useTeacherLesson(lessonId);
   return (
     <div data-theme="board" className="flex h-dvh flex-col overflow-hidden bg-paper text-ink">
       {lesson ? (
-        <BoardLayout lesson={lesson} send={send} status={<ConnectionStatus connection={connection} />} graphPanel={graphPanel} tallyPanel={tallyPanel} />
+        <BoardLayout
+          lesson={lesson}
+          send={send}
+          status={<ConnectionStatus connection={connection} />}
+          graphPanel={graphPanel}
+          tallyPanel={tallyPanel}
+          onBoardControl={onBoardControl}
+        />
       ) : refusal ? (
         <main id="main" className="mx-auto max-w-prose p-8">
           <ErrorState title="This lesson cannot be shown" error={refusal} />
@@ -69,7 +78,12 @@ export function LessonBoard({ lessonId, graphPanel, tallyPanel }: { lessonId: st
 }
 
 /** The board's layout; the graph and tally slots are marked in `BoardSlots`. */
-export function BoardLayout({ lesson, send, status, graphPanel, tallyPanel }: { lesson: LiveTeacherLesson; send: Send; status: ReactNode } & BoardSlots) {
+export function BoardLayout({ lesson, send, status, graphPanel, tallyPanel, onBoardControl }: {
+  lesson: LiveTeacherLesson;
+  send: Send;
+  status: ReactNode;
+  onBoardControl?: BoardControlSubscribe;
+} & BoardSlots) {
   const trial = currentTrialOf(lesson);
   const [open, setOpen] = useState(true);
   const panel = { open, toggle: () => setOpen((o) => !o) };
@@ -94,7 +108,16 @@ export function BoardLayout({ lesson, send, status, graphPanel, tallyPanel }: { 
       ) : null}
       <div className="flex min-h-0 flex-1">
         {trial ? (
-          <TrialBoard key={trial.id} lesson={lesson} trial={trial} send={send} panel={panel} graphPanel={graphPanel} tallyPanel={tallyPanel} />
+          <TrialBoard
+            key={trial.id}
+            lesson={lesson}
+            trial={trial}
+            send={send}
+            panel={panel}
+            graphPanel={graphPanel}
+            tallyPanel={tallyPanel}
+            onBoardControl={onBoardControl}
+          />
         ) : (
           <>
             <main id="main" className="flex-1 p-[2vw]">
@@ -109,11 +132,12 @@ export function BoardLayout({ lesson, send, status, graphPanel, tallyPanel }: { 
 }
 
 /** One trial on the board: the rig and its run, the question and counts, theory and slots. */
-function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
+function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel, onBoardControl }: {
   lesson: LiveTeacherLesson;
   trial: TeacherTrial;
   send: Send;
   panel: PanelState;
+  onBoardControl?: BoardControlSubscribe;
 } & BoardSlots) {
   const setup = useSetupDraft(trial, send);
   // While setting up, draw what is typed (if it reads); afterwards the stored set-up.
@@ -187,6 +211,10 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel }: {
     }
   };
   useBoardKeys(onAction, () => !controller.getSnapshot().playing);
+  // The remote's play, speed and replay buttons arrive here as the same actions as the keys.
+  const onActionRef = useRef(onAction);
+  onActionRef.current = onAction;
+  useEffect(() => onBoardControl?.((action) => onActionRef.current(action)), [onBoardControl]);
 
   const look = recording ?? sim.preview;
   const question = trial.question;

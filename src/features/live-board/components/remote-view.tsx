@@ -1,3 +1,6 @@
+import { useState } from "react";
+import type { BoardControl } from "@contracts/lesson-rules";
+import { Button } from "@/components/ui/button";
 import { ErrorState } from "@/components/ui/error-state";
 import { Notice } from "@/components/ui/notice";
 import { LoadingState } from "@/components/ui/spinner";
@@ -58,8 +61,10 @@ export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tally
 
 function RemoteTrial({ lessonId, trial, send }: { lessonId: string; trial: TeacherTrial; send: Send }) {
   const setup = useSetupDraft(trial, send);
+  const afterRun = trial.phase !== "setup" && trial.phase !== "predict";
   return (
     <>
+      {afterRun ? <BoardPlayback lessonId={lessonId} send={send} /> : null}
       <SetupPanel trial={trial} lessonId={lessonId} setup={setup} send={send} />
       <section aria-labelledby="remote-explanations" className="grid gap-2">
         <h2 id="remote-explanations" className="text-xl font-bold">Explanations</h2>
@@ -67,5 +72,40 @@ function RemoteTrial({ lessonId, trial, send }: { lessonId: string; trial: Teach
         <ExplanationList explanations={trial.explanations} withNames send={send} />
       </section>
     </>
+  );
+}
+
+const PLAYBACK_BUTTONS: { action: BoardControl; label: string }[] = [
+  { action: "toggle-play", label: "Play or pause" },
+  { action: "toggle-slow", label: "Slow motion on or off" },
+  { action: "replay", label: "Replay from the start" },
+];
+
+/** The board's player, worked from the remote: the board plays the run, the remote only asks. */
+function BoardPlayback({ lessonId, send }: { lessonId: string; send: Send }) {
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState<BoardControl | null>(null);
+  const ask = (action: BoardControl) => {
+    setBusy(action);
+    send("board:control", { lessonId, action })
+      .then(() => setError(null), (e: unknown) => setError(e instanceof Error ? e.message : "The board did not get that."))
+      .finally(() => setBusy(null));
+  };
+  return (
+    <section aria-labelledby="remote-playback" className="grid gap-2">
+      <h2 id="remote-playback" className="text-xl font-bold">The run on the board</h2>
+      <div className="flex flex-wrap gap-3">
+        {PLAYBACK_BUTTONS.map(({ action, label }) => (
+          <Button key={action} size="lg" busy={busy === action} onClick={() => ask(action)}>
+            {label}
+          </Button>
+        ))}
+      </div>
+      {error ? (
+        <Notice tone="danger" live="alert">
+          <p>{error}</p>
+        </Notice>
+      ) : null}
+    </section>
   );
 }
