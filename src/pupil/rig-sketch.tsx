@@ -21,6 +21,22 @@ function Floor({ y = 112 }: { y?: number }) {
   );
 }
 
+/** The fountain before its run: only the release, so the sketch does not answer the question. */
+const FOUNTAIN_AT_REST = {
+  describe: "A pot of chain on a high shelf; one end of the chain is pulled over the rim, ready to be let go.",
+  draw: () => (
+    <>
+      <Floor />
+      <path d="M20 62 H78 V112" className="stroke-ink" {...FIXTURE} />
+      <path d="M36 42 V60 H66 V42" className="stroke-ink" {...FIXTURE} />
+      {/* chain heaped in the pot, its end over the rim and hanging down */}
+      <path d="M40 56 q10 -4 20 0" className="stroke-accent" {...CHAIN} />
+      <path d="M60 54 C62 46 70 41 76 44 C84 48 86 56 86 66 V108" className="stroke-accent" {...CHAIN} />
+      <line x1={30} x2={74} y1={42} y2={42} className="stroke-line-strong" strokeWidth={1} strokeDasharray="2 2" />
+    </>
+  ),
+};
+
 const SKETCHES: Record<PublicTrial["rig"], { describe: string; draw: () => ReactNode }> = {
   fountain: {
     describe: "A pot of chain on a high shelf; the chain rises above the rim and falls to the floor.",
@@ -93,8 +109,14 @@ const SKETCHES: Record<PublicTrial["rig"], { describe: string; draw: () => React
   },
 };
 
-export function RigSketch({ rig, label, className }: { rig: PublicTrial["rig"]; label: string; className?: string }) {
-  const sketch = SKETCHES[rig];
+export function RigSketch({ rig, label, beforeRun, className }: {
+  rig: PublicTrial["rig"];
+  label: string;
+  /** Before the run the fountain is drawn at rest: its arch is what pupils are predicting. */
+  beforeRun: boolean;
+  className?: string;
+}) {
+  const sketch = rig === "fountain" && beforeRun ? FOUNTAIN_AT_REST : SKETCHES[rig];
   return (
     <figure className={cx("rounded-control bg-sunken p-2", className)}>
       <svg viewBox="0 0 200 124" className="mx-auto block h-auto w-full max-w-80" role="img" aria-label={`Sketch of the ${label.toLowerCase()}: ${sketch.describe}`} data-testid="rig-sketch">

@@ -337,6 +337,7 @@ function PhaseSteps({ phase }: { phase: PublicTrial["phase"] }) {
 
 export function TrialView({ client, state, trial, className }: { client: PupilClient; state: PupilState; trial: PublicTrial; className: string }) {
   const question = trial.question;
+  const beforeRun = trial.phase === "setup" || trial.phase === "predict";
   return (
     <>
       <section className={CARD} aria-labelledby="trial-heading">
@@ -346,9 +347,10 @@ export function TrialView({ client, state, trial, className }: { client: PupilCl
         <h1 id="trial-heading" className="text-2xl font-bold">
           {trial.rigLabel}
         </h1>
-        <p className="mt-1">{trial.rigSummary}</p>
+        {/* What the rig does is shown after the run: before it, it could answer the question. */}
+        {beforeRun ? null : <p className="mt-1">{trial.rigSummary}</p>}
         <PhaseSteps phase={trial.phase} />
-        <RigSketch rig={trial.rig} label={trial.rigLabel} className="mt-3" />
+        <RigSketch rig={trial.rig} label={trial.rigLabel} beforeRun={beforeRun} className="mt-3" />
         {trial.shownParams.length > 0 ? (
           <dl className="mt-3 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 border-t border-line pt-3">
             {trial.shownParams.map((p) => (

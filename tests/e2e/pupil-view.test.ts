@@ -207,6 +207,8 @@ describe("pupil page", () => {
         await page.getByText("1.2 m", { exact: true }).waitFor();
         await page.getByText("Joined as").waitFor();
         expect(await page.getByTestId("rig-sketch").getAttribute("aria-label")).toMatch(/fountain rig/);
+        // Before the run the sketch shows the release only, not the arch pupils are asked about.
+        expect(await page.getByTestId("rig-sketch").getAttribute("aria-label")).toMatch(/ready to be let go/);
 
         // The first load fetched exactly the pupil page's files, which the size check measures.
         const firstLoad = measurePupilFirstLoad(clientDir).files.filter((f) => f.kind === "js").map((f) => f.file);
@@ -246,6 +248,7 @@ describe("pupil page", () => {
         server.trial.answers = [12.5, 8, 10, 10, 16, 20, 14, 30].map((value) => ({ round: 1 as const, value, choice: null }));
         server.io.to(server.lesson.id).emit("lesson:changed", server.lesson);
         await page.getByRole("heading", { name: "Your prediction and the result" }).waitFor();
+        expect(await page.getByTestId("rig-sketch").getAttribute("aria-label")).toMatch(/rises above the rim/);
         await expect(page.getByTestId("compare-own").textContent()).resolves.toBe("12.5 cm");
         await expect(page.getByTestId("compare-result").textContent()).resolves.toBe("14.2 cm ± 0.4 cm");
         await expect(page.getByTestId("compare-theory").textContent()).resolves.toBe("15.1 cm");
