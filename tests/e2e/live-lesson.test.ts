@@ -63,12 +63,16 @@ describe("a live lesson, board and pupils", () => {
     const boardText = await board.locator("main").innerText();
     for (const pupil of pupils) expect(boardText).not.toContain(pupil.name);
     expect(boardText).not.toContain("14.5");
+    // The theory's number would answer the question: it waits for the run.
+    await board.getByText("Hidden until predictions close").waitFor();
+    expect(boardText).not.toContain("Closed form");
     await keepScreenshot(board, "e2e", "40-live-board-predict");
     await keepScreenshot(pupils[1]!.page, "e2e", "41-live-pupil-predict");
 
     // Run: the board plays the recorded run and sends the result to the server once.
     await board.locator("body").press("r");
     await board.getByText(/^\d+(\.\d+)? ± \d+(\.\d+)? cm$/).waitFor({ timeout: 120_000 });
+    await board.getByText(/^Closed form/).waitFor();
     const canvas = board.getByTestId("trial-graph-canvas");
     await canvas.waitFor({ timeout: 60_000 });
     await board.waitForFunction(

@@ -223,6 +223,8 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel, onBoar
   const collecting = trial.phase === ROUND_PHASE[1] || trial.phase === ROUND_PHASE[2];
   const shown = trial.explanations.filter((x) => x.shown);
   const afterRun = trial.phase !== "setup" && trial.phase !== "predict";
+  // The theory's number would answer the question: on the projector it waits for the run unless the teacher shows it.
+  const [theoryRevealed, setTheoryRevealed] = useState(false);
 
   return (
     <>
@@ -327,21 +329,33 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel, onBoar
               </ul>
             </section>
           ) : null}
-          <TheoryPanel
-            rig={simTrial.rig}
-            params={simTrial.params}
-            theory={trial.theory}
-            unit={question.unit}
-            coefficients={
-              setup.editable
-                ? {
-                    values: { theoryAlpha: setup.draft.params.theoryAlpha ?? "", theoryBeta: setup.draft.params.theoryBeta ?? "" },
-                    errors: setup.errors,
-                    onChange: (key, text) => setup.change((d) => ({ ...d, params: { ...d.params, [key]: text } })),
-                  }
-                : undefined
-            }
-          />
+          {afterRun || theoryRevealed ? (
+            <TheoryPanel
+              rig={simTrial.rig}
+              params={simTrial.params}
+              theory={trial.theory}
+              unit={question.unit}
+              coefficients={
+                setup.editable
+                  ? {
+                      values: { theoryAlpha: setup.draft.params.theoryAlpha ?? "", theoryBeta: setup.draft.params.theoryBeta ?? "" },
+                      errors: setup.errors,
+                      onChange: (key, text) => setup.change((d) => ({ ...d, params: { ...d.params, [key]: text } })),
+                    }
+                  : undefined
+              }
+            />
+          ) : (
+            <section aria-labelledby="theory-hidden-title" className="grid gap-2 rounded-card border border-dashed border-line p-3">
+              <h2 id="theory-hidden-title" className="text-[max(1.1rem,2.8vh)] font-bold">
+                Theory
+              </h2>
+              <p className="text-ink-muted">Hidden until predictions close, so the projector does not give the answer away.</p>
+              <div>
+                <Button onClick={() => setTheoryRevealed(true)}>Show the theory now</Button>
+              </div>
+            </section>
+          )}
         </div>
       </main>
       <TeacherAside lesson={lesson} trial={trial} send={send} panel={panel} onRun={() => controller.replay()}>
