@@ -4,15 +4,15 @@
  * where the chain is, keeps screenshots, and prints how long one frame takes to draw (a figure
  * to read, not a timed assertion).
  */
-import { existsSync, readFileSync, rmSync } from "node:fs";
-import { createServer, type Server } from "node:http";
-import { extname, join, normalize } from "node:path";
+import { rmSync } from "node:fs";
+import { join } from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { build } from "vite";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { projectPath } from "../../server/paths";
 import { keepScreenshot, launchBrowser } from "../support/browser";
 import { TEST_DATA_DIR } from "../support/paths";
+import { serveFolder, type StaticServer } from "../support/static-server";
 
 /** What the test page (src/features/live-board/testing/rig-stage-harness.tsx) offers. */
 declare global {
@@ -31,8 +31,7 @@ declare global {
 }
 
 const dir = join(TEST_DATA_DIR, "board-drawing");
-const TYPES: Record<string, string> = { ".js": "text/javascript", ".html": "text/html", ".css": "text/css", ".woff2": "font/woff2", ".woff": "font/woff" };
-let server: Server;
+let server: StaticServer | undefined;
 let base = "";
 let browser: Browser;
 
@@ -43,21 +42,14 @@ beforeAll(async () => {
     logLevel: "error",
     build: { outDir: dir, emptyOutDir: true, sourcemap: false, rolldownOptions: { input: projectPath("tests/e2e/board-drawing.html") } },
   });
-  server = createServer((req, res) => {
-    const path = normalize(decodeURIComponent((req.url ?? "/").split("?")[0]!)).replace(/^(\.\.[/\\])+/, "");
-    const file = join(dir, path);
-    if (!file.startsWith(dir) || !existsSync(file)) return void res.writeHead(404).end();
-    res.writeHead(200, { "content-type": TYPES[extname(file)] ?? "application/octet-stream" });
-    res.end(readFileSync(file));
-  });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  base = `http://127.0.0.1:${(server.address() as { port: number }).port}/tests/e2e/board-drawing.html`;
+  server = await serveFolder(dir);
+  base = `${server.url}/tests/e2e/board-drawing.html`;
   browser = await launchBrowser();
 }, 180_000);
 
 afterAll(async () => {
   await browser?.close();
-  await new Promise((resolve) => server?.close(resolve));
+  await server?.close();
 });
 
 /** Counts chain-coloured (amber) pixels of the chain layer, in bands of the stage's height. */

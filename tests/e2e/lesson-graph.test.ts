@@ -4,9 +4,8 @@
  * form, in the light and the board theme. Checks that the canvas is drawn where the values say,
  * that the summary figures are right, that the board text is big enough, and keeps screenshots.
  */
-import { mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { createServer, type Server } from "node:http";
-import { extname, join } from "node:path";
+import { mkdirSync, rmSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
 import tailwindcss from "@tailwindcss/vite";
 import react from "@vitejs/plugin-react";
 import type { Browser } from "playwright-core";
@@ -16,10 +15,11 @@ import { projectPath } from "../../server/paths";
 import { keepScreenshot, launchBrowser } from "../support/browser";
 import { TEST_DATA_DIR } from "../support/paths";
 import { drawnOnCanvas } from "../support/chart-canvas";
+import { serveFolder, type StaticServer } from "../support/static-server";
 
 const dir = join(TEST_DATA_DIR, "lesson-graph");
 const out = join(dir, "dist");
-let server: Server;
+let server: StaticServer | undefined;
 let base = "";
 let browser: Browser;
 
@@ -116,27 +116,14 @@ beforeAll(async () => {
     },
     build: { outDir: out, emptyOutDir: true, minify: false },
   });
-  const types: Record<string, string> = { ".js": "text/javascript", ".css": "text/css", ".html": "text/html", ".woff2": "font/woff2", ".woff": "font/woff" };
-  server = createServer((req, res) => {
-    const path = (req.url ?? "/").split("?")[0]!;
-    const name = path === "/" ? "index.html" : path.slice(1);
-    if (name.includes("..")) return void res.writeHead(400).end();
-    try {
-      const body = readFileSync(join(out, name));
-      res.writeHead(200, { "content-type": types[extname(name)] ?? "application/octet-stream" });
-      res.end(body);
-    } catch {
-      res.writeHead(404).end();
-    }
-  });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
+  server = await serveFolder(out);
+  base = server.url;
   browser = await launchBrowser();
 }, 180_000);
 
 afterAll(async () => {
   await browser?.close();
-  await new Promise((resolve) => server?.close(resolve));
+  await server?.close();
 });
 
 async function openPage(theme: "light" | "board") {

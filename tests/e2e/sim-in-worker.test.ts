@@ -4,7 +4,6 @@
  * in Node (both run V8, and sim/ takes its randomness from a seed, never from the clock).
  */
 import { mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { createServer, type Server } from "node:http";
 import { join } from "node:path";
 import type { Browser } from "playwright-core";
 import { build } from "vite";
@@ -13,9 +12,10 @@ import { RIGS, runTrial } from "../../sim";
 import { projectPath } from "../../server/paths";
 import { launchBrowser } from "../support/browser";
 import { TEST_DATA_DIR } from "../support/paths";
+import { serveFolder, type StaticServer } from "../support/static-server";
 
 const dir = join(TEST_DATA_DIR, "sim-worker");
-let server: Server;
+let server: StaticServer | undefined;
 let base = "";
 let browser: Browser;
 
@@ -46,24 +46,14 @@ beforeAll(async () => {
      };`,
   );
   writeFileSync(join(dir, "index.html"), "<!doctype html><title>sim worker</title>");
-  server = createServer((req, res) => {
-    const name = (req.url ?? "/").split("?")[0] === "/" ? "index.html" : (req.url ?? "").slice(1);
-    try {
-      const body = readFileSync(join(dir, name.replace(/[^a-z.]/gi, "")));
-      res.writeHead(200, { "content-type": name.endsWith(".js") ? "text/javascript" : "text/html" });
-      res.end(body);
-    } catch {
-      res.writeHead(404).end();
-    }
-  });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
+  server = await serveFolder(dir);
+  base = server.url;
   browser = await launchBrowser();
 }, 120_000);
 
 afterAll(async () => {
   await browser?.close();
-  await new Promise((resolve) => server?.close(resolve));
+  await server?.close();
 });
 
 describe("the simulation in a browser worker", () => {
