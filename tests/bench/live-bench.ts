@@ -156,7 +156,8 @@ async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: num
   const url = `http://127.0.0.1:${port}`;
   console.log(`Starting Linkleap as \`npm start\` does (data in .data/bench, port ${port})…`);
   const { child } = await startChild(
-    [projectPath("node_modules", ".bin", "tsx"), projectPath("server", "index.ts")],
+    // Node with tsx's loader, as `npm start` runs it: no tsx parent process between the signal and the server.
+    [process.execPath, "--import", "tsx", projectPath("server", "index.ts")],
     {
       LINKLEAP_DATA_DIR: DATA_DIR,
       PORT: String(port),
@@ -247,7 +248,7 @@ async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: num
   } finally {
     for (const s of sockets) s.close();
     await stopChild(child);
-    // tsx may exit before the server has stopped its Postgres: make sure it is down.
+    // Should the server have died without stopping its Postgres, do not leave it running.
     await stopCluster(join(DATA_DIR, "postgres"));
   }
 }

@@ -94,7 +94,7 @@ describe("npm start on a fresh machine's data folder", () => {
     expect(groupAlive(child.pid!)).toBe(false);
     expect(output).toContain("SIGINT: stopping Linkleap");
     // Postgres was started by npm start, so npm start stopped it.
-    expect(existsSync(join(dataDir, "postgres", "pgdata", "postmaster.pid"))).toBe(false);
+    expect(existsSync(join(dataDir, "postgres", "pgdata", "postmaster.pid")), `npm start's output:\n${output}`).toBe(false);
     await expect(fetch(`${url}/api/health`)).rejects.toThrow();
   });
 });
