@@ -17,6 +17,7 @@ import { fountainSteady } from "@sim/theory";
 import { cx } from "@/lib/cx";
 import { useViewportHeight } from "../hooks/use-viewport-height";
 import { DASH, formatValue, GRAPH_COLOURS, GRAPH_FONT_FAMILY, graphFontSize, jitter, MARKERS, markerRadius, type GraphTheme } from "../utils/graph-style";
+import { drawnMarkers } from "../utils/drawn-markers";
 import { summariseAnswers } from "../utils/prediction-summary";
 
 ChartJS.register(ScatterController, LinearScale, PointElement, LineElement, Tooltip, Legend);
@@ -41,17 +42,6 @@ export interface FountainSeriesGraphProps {
   bench?: { potHeight: number; rise: number }[];
   theme: GraphTheme;
 }
-
-const drawnMarkers: Plugin<"scatter"> = {
-  id: "fountainSeriesDrawn",
-  afterRender(chart) {
-    const drawn = chart.data.datasets.map((ds, i) => ({
-      label: ds.label ?? "",
-      points: chart.getDatasetMeta(i).data.map((el) => [Math.round(el.x), Math.round(el.y)]),
-    }));
-    chart.canvas.dataset.drawn = JSON.stringify(drawn);
-  },
-};
 
 /**
  * Rise above the rim against pot height across the lesson's fountain trials: the class's
@@ -180,7 +170,7 @@ export function FountainSeriesGraph({ trials, unit = "cm", theory, bench = [], t
         <Scatter
           data={data}
           options={options}
-          plugins={[drawnMarkers]}
+          plugins={[drawnMarkers as Plugin<"scatter">]}
           role="img"
           aria-label="Graph of rise above the rim against pot height across this lesson's fountain trials. The same numbers are in the table that follows."
           aria-describedby={descriptionId}

@@ -30,6 +30,7 @@ import {
   markerRadius,
   type GraphTheme,
 } from "../utils/graph-style";
+import { drawnMarkers } from "../utils/drawn-markers";
 import { choiceHoldingResult, countChoices, summariseAnswers, type PredictionSummary } from "../utils/prediction-summary";
 
 ChartJS.register(ScatterController, BarController, LinearScale, CategoryScale, PointElement, LineElement, BarElement, Tooltip, Legend);
@@ -54,18 +55,6 @@ export interface TrialGraphProps {
 }
 
 const ROUND_WORDS = { 1: "Before the run", 2: "Re-vote" } as const;
-
-/** Writes what each dataset drew (canvas CSS px) on the canvas element, so a browser test can look there. */
-const drawnMarkers: Plugin = {
-  id: "lessonGraphDrawn",
-  afterRender(chart) {
-    const drawn = chart.data.datasets.map((ds, i) => ({
-      label: ds.label ?? "",
-      points: chart.getDatasetMeta(i).data.map((el) => [Math.round(el.x), Math.round(el.y)]),
-    }));
-    chart.canvas.dataset.drawn = JSON.stringify(drawn);
-  },
-};
 
 interface LineLabel {
   x: number;
