@@ -59,6 +59,10 @@ export const questionSchema = z.discriminatedUnion("kind", [
     quantity: z.string().min(1).max(40),
     unit: z.string().max(8),
     askReason: z.boolean().default(true),
+    /** Ask pupils to explain what they saw after the run (phase "explain"). */
+    askExplanation: z.boolean().default(true),
+    /** Offer a second vote after the discussion (phase "re-vote"). */
+    revote: z.boolean().default(true),
   }),
   z.object({
     kind: z.literal("choice"),
@@ -70,6 +74,10 @@ export const questionSchema = z.discriminatedUnion("kind", [
       .min(LESSON_LIMITS.minChoices, `Give at least ${LESSON_LIMITS.minChoices} choices.`)
       .max(LESSON_LIMITS.maxChoices, `Give at most ${LESSON_LIMITS.maxChoices} choices.`),
     askReason: z.boolean().default(true),
+    /** Ask pupils to explain what they saw after the run (phase "explain"). */
+    askExplanation: z.boolean().default(true),
+    /** Offer a second vote after the discussion (phase "re-vote"). */
+    revote: z.boolean().default(true),
   }),
 ]);
 export type Question = z.output<typeof questionSchema>;
@@ -82,6 +90,7 @@ export const trialSetupSchema = z.object({
   question: questionSchema,
 });
 export type TrialSetupInput = z.input<typeof trialSetupSchema>;
+export type TrialSetup = z.output<typeof trialSetupSchema>;
 
 export const startLessonInputSchema = z.object({
   /** Show pupils' names on the board for this lesson (off unless the teacher turns it on). */

@@ -23,7 +23,7 @@ import { DEFAULT_RETENTION, RETENTION_PERIODS } from "../contracts/retention";
 import { STAFF_ROLES } from "../contracts/staff-roles";
 import type { BenchSource, HeightUnit, PhotoMediaType } from "../contracts/bench";
 import type { PhotoMarks } from "../contracts/photo-measure";
-import type { Question, Tally, TheoryValues } from "../contracts/lessons";
+import type { Question, Tally, TheoryValues, TrialSetup } from "../contracts/lessons";
 import type { TrialPhase } from "../contracts/lesson-rules";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -181,6 +181,61 @@ export const benchRuns = pgTable(
 );
 
 /**
+ * A teacher's plan of trials, reused across lessons. Trials are kept as one checked array (rig,
+ * parameters, question) because the plan is always edited and read as a whole. A shared plan can
+ * be read and duplicated by colleagues in the owner's department; only the owner edits it.
+ */
+export const lessonPlans = pgTable(
+  "lesson_plans",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    schoolId: uuid("school_id")
+      .notNull()
+      .references(() => schools.id, { onDelete: "cascade" }),
+    /** The owner's department when the plan was saved: sharing reaches this department only. */
+    departmentId: uuid("department_id").references(() => departments.id, { onDelete: "set null" }),
+    ownerId: uuid("owner_id")
+      .notNull()
+      .references(() => staff.id, { onDelete: "cascade" }),
+    title: text("title").notNull(),
+    /** The teacher's own aim and notes for the plan. */
+    summary: text("summary").notNull().default(""),
+    trials: jsonb("trials").$type<TrialSetup[]>().notNull(),
+    shared: boolean("shared").notNull().default(false),
+    /** The plan this one was duplicated from, if any (kept as a plain id: the original may go). */
+    copiedFromId: uuid("copied_from_id"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index("lesson_plans_owner_idx").on(t.ownerId, t.updatedAt),
+    index("lesson_plans_shared_idx").on(t.departmentId).where(sql`${t.shared}`),
+  ],
+);
+
+/**
+ * A lesson the teacher has put in the diary for a class (optionally with a plan), so home can
+ * show what comes next and start it in one click. Starting it links the live lesson.
+ */
+export const plannedLessons = pgTable(
+  "planned_lessons",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    classId: uuid("class_id")
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    teacherId: uuid("teacher_id")
+      .notNull()
+      .references(() => staff.id, { onDelete: "cascade" }),
+    planId: uuid("plan_id").references(() => lessonPlans.id, { onDelete: "set null" }),
+    plannedFor: timestamp("planned_for", { withTimezone: true }).notNull(),
+    lessonId: uuid("lesson_id").references(() => lessons.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("planned_lessons_teacher_idx").on(t.teacherId, t.plannedFor)],
+);
+
+/**
  * A live lesson: one class, its teacher, a sequence of trials. The code is unique among open
  * lessons only; once a lesson ends its code may be given out again.
  */
@@ -199,6 +254,9 @@ export const lessons = pgTable(
     /** Pupils' names on the board: off unless the teacher turns it on for this lesson. */
     showNames: boolean("show_names").notNull().default(false),
     currentTrialId: uuid("current_trial_id"),
+    /** The plan the lesson started from, and its title then (shown even if the plan is later deleted). */
+    planId: uuid("plan_id").references(() => lessonPlans.id, { onDelete: "set null" }),
+    planTitle: text("plan_title"),
     startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
     endedAt: timestamp("ended_at", { withTimezone: true }),
   },

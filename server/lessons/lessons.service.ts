@@ -68,7 +68,7 @@ export const hashResumeToken = (token: string) => createHash("sha256").update(to
 // ---- Set-ups: rig parameters and questions ----
 
 export function defaultQuestion(rig: RigId): Question {
-  return { kind: "number", ...DEFAULT_QUESTIONS[rig], askReason: true };
+  return { kind: "number", ...DEFAULT_QUESTIONS[rig], askReason: true, askExplanation: true, revote: true };
 }
 
 export function defaultParams(rig: RigId): Record<string, unknown> {

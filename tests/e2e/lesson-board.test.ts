@@ -31,7 +31,7 @@ const trial: TeacherTrial = {
     { key: "potHeight", label: "Height of the pot above the floor", unit: "m", value: 1 },
     { key: "links", label: "Number of links", unit: "", value: 200 },
   ],
-  question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true },
+  question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true, askExplanation: true, revote: true },
   phase: "predict",
   answered: { 1: 3, 2: 0 },
   result: null,

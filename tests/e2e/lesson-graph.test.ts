@@ -28,7 +28,7 @@ const RESULT = { value: 11, uncertainty: 0.3, unit: "cm" };
 const THEORY = { value: (0.8 * 0.12) / 0.88 * 100, uncertainty: null, unit: "cm" };
 const FIXTURE = {
   number: {
-    question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true },
+    question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true, askExplanation: true, revote: true },
     quantityLabel: "Rise of the chain above the rim",
     answers: [
       { round: 1, value: 20, choice: null },
@@ -46,6 +46,8 @@ const FIXTURE = {
       quantity: "rise",
       unit: "cm",
       askReason: true,
+      askExplanation: true,
+      revote: true,
       choices: [
         { label: "Under 10 cm", min: null, max: 10 },
         { label: "10 to 20 cm", min: 10, max: 20 },

@@ -48,6 +48,8 @@ function fakeLessonServer(clientDir: string, options: { roster?: boolean; questi
       quantity: "rise",
       unit: "cm",
       askReason: true,
+      askExplanation: true,
+      revote: true,
     },
     phase: "predict",
     answered: { 1: 0, 2: 0 },
@@ -311,6 +313,8 @@ describe("pupil page", () => {
         quantity: "riseRatio",
         unit: "",
         askReason: false,
+        askExplanation: true,
+        revote: true,
         choices: [
           { label: "It does not rise above the rim", min: null, max: 0.01 },
           { label: "A little: under a tenth of the drop", min: 0.01, max: 0.1 },

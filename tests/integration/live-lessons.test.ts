@@ -78,7 +78,7 @@ describe("starting, listing and ending lessons over HTTP", () => {
     const [trial] = await ctx.database.db.select().from(trials).where(eq(trials.lessonId, row!.id));
     expect(row!.currentTrialId).toBe(trial!.id);
     expect(trial).toMatchObject({ rig: "fountain", phase: "setup", position: 1, params: RIGS.fountain.schema.parse({}) });
-    expect(trial!.question).toEqual({ kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true });
+    expect(trial!.question).toEqual({ kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true, askExplanation: true, revote: true });
   });
 
   it("an archived class cannot start a lesson", async () => {

@@ -30,7 +30,7 @@ async function seed(db: Db): Promise<Fixture> {
         position: i + 1,
         rig: "fountain",
         params: {},
-        question: { kind: "number", prompt: "How high?", quantity: "rise", unit: "cm", askReason: true },
+        question: { kind: "number", prompt: "How high?", quantity: "rise", unit: "cm", askReason: true, askExplanation: true, revote: true },
         // The last trial was set up but never run.
         ranAt: i < trialsRun ? startedAt : null,
       });

@@ -43,8 +43,8 @@ describe("fountain series", () => {
       {
         trials: [
           trial({ predictions: [prediction(1, 12), prediction(2, 99)], measured: { rise: { value: 0.143, uncertainty: 0.01, unit: "m", basis: "" } } }),
-          trial({ params: { potHeight: 1.5 }, question: { kind: "number", prompt: "?", quantity: "rise", unit: "mm", askReason: false }, predictions: [prediction(1, 200)] }),
-          trial({ question: { kind: "number", prompt: "?", quantity: "speed", unit: "m/s", askReason: false } }),
+          trial({ params: { potHeight: 1.5 }, question: { kind: "number", prompt: "?", quantity: "rise", unit: "mm", askReason: false, askExplanation: true, revote: true }, predictions: [prediction(1, 200)] }),
+          trial({ question: { kind: "number", prompt: "?", quantity: "speed", unit: "m/s", askReason: false, askExplanation: true, revote: true } }),
           trial({ rig: "hanging" }),
         ],
       },

@@ -18,7 +18,7 @@ const trial = (id: string): TeacherTrial => ({
   rigSummary: "",
   params: {},
   shownParams: [],
-  question: { kind: "number", prompt: "How high?", quantity: "rise", unit: "cm", askReason: true },
+  question: { kind: "number", prompt: "How high?", quantity: "rise", unit: "cm", askReason: true, askExplanation: true, revote: true },
   phase: "predict",
   answered: { 1: 0, 2: 0 },
   result: null,

@@ -27,7 +27,7 @@ describe("from the form to trial:setup", () => {
     expect(payload).toEqual({
       rig: "fountain",
       params: { linkShape: "rod" },
-      question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true },
+      question: { kind: "number", prompt: "How high above the rim will the chain rise?", quantity: "rise", unit: "cm", askReason: true, askExplanation: true, revote: true },
     });
     expect(trialSetupSchema.safeParse(payload).success).toBe(true);
     expect(RIGS.fountain.schema.safeParse(payload!.params).success).toBe(true);
@@ -81,7 +81,7 @@ describe("from the form to trial:setup", () => {
 
   it("round-trips a stored set-up", () => {
     const stored = { rig: "fountain" as const, params: { linkShape: "tube", potHeight: 2 }, question: { kind: "number" as const, prompt: "How fast?", quantity: "speed", unit: "m/s" } };
-    expect(setupPayload(draftFromSetup(stored)).payload).toEqual({ ...stored, question: { ...stored.question, askReason: true } });
+    expect(setupPayload(draftFromSetup(stored)).payload).toEqual({ ...stored, question: { ...stored.question, askReason: true, askExplanation: true, revote: true } });
   });
 
   it("puts the server's field messages beside the same fields", () => {

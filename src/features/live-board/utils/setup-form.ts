@@ -44,6 +44,8 @@ export interface SetupDraft {
     unit: string;
     choices: ChoiceDraft[];
     askReason: boolean;
+    askExplanation: boolean;
+    revote: boolean;
   };
 }
 
@@ -51,7 +53,7 @@ const text = (value: unknown) => (typeof value === "number" && Number.isFinite(v
 
 export function defaultQuestionDraft(rig: RigId): SetupDraft["question"] {
   const q = DEFAULT_QUESTIONS[rig];
-  return { kind: "number", prompt: q.prompt, quantity: q.quantity, unit: q.unit, choices: [], askReason: true };
+  return { kind: "number", prompt: q.prompt, quantity: q.quantity, unit: q.unit, choices: [], askReason: true, askExplanation: true, revote: true };
 }
 
 /** The form for a trial's stored set-up (parameters not stored show their defaults as placeholders). */
@@ -71,6 +73,8 @@ export function draftFromSetup(setup: { rig: RigId; params: Record<string, unkno
       unit: q.unit,
       choices: q.kind === "choice" ? q.choices.map((c) => ({ label: c.label, min: text(c.min), max: text(c.max) })) : [],
       askReason: q.askReason ?? true,
+      askExplanation: q.askExplanation ?? true,
+      revote: q.revote ?? true,
     },
   };
 }
@@ -123,7 +127,7 @@ export function setupPayload(draft: SetupDraft): { payload: TrialSetupInput | nu
   let question: QuestionInput;
   if (q.kind === "number") {
     if (!unitsFor(draft.rig, q.quantity).includes(q.unit)) errors["question.unit"] = "Pick a unit.";
-    question = { kind: "number", prompt, quantity: q.quantity, unit: q.unit, askReason: q.askReason };
+    question = { kind: "number", prompt, quantity: q.quantity, unit: q.unit, askReason: q.askReason, askExplanation: q.askExplanation, revote: q.revote };
   } else {
     const choices = q.choices.map((c, i) => {
       const label = c.label.replace(/\s+/g, " ").trim();
@@ -138,7 +142,7 @@ export function setupPayload(draft: SetupDraft): { payload: TrialSetupInput | nu
     });
     if (choices.length < LESSON_LIMITS.minChoices) errors["question.choices"] = `Give at least ${LESSON_LIMITS.minChoices} choices.`;
     if (choices.length > LESSON_LIMITS.maxChoices) errors["question.choices"] = `Give at most ${LESSON_LIMITS.maxChoices} choices.`;
-    question = { kind: "choice", prompt, quantity: q.quantity, unit: q.unit, choices, askReason: q.askReason };
+    question = { kind: "choice", prompt, quantity: q.quantity, unit: q.unit, choices, askReason: q.askReason, askExplanation: q.askExplanation, revote: q.revote };
   }
   if (Object.keys(errors).length > 0) return { payload: null, errors };
   return { payload: { rig: draft.rig, params, question }, errors };
