@@ -31,7 +31,7 @@ describe("starting a lesson with an earlier lesson's trials", () => {
   it("copies the set-ups and questions in order, with no answers, and only from the teacher's own lessons", async () => {
     const first = await teacherA.json<{ lessonId: string }>(`/api/classes/${ctx.fixture.classA}/lessons`, { method: "POST", json: {} });
     const { board, view } = await watch(teacherA, first.body.lessonId);
-    const question = { kind: "number", prompt: "How high above the rim?", quantity: "rise", unit: "mm", askReason: false };
+    const question = { kind: "number", prompt: "How high above the rim?", quantity: "rise", unit: "mm", askReason: false, askExplanation: false, revote: true };
     await ok(board, "trial:setup", { trialId: view.currentTrialId, rig: "fountain", params: { potHeight: 1.5 }, question });
     await ok(board, "trial:add", {
       lessonId: first.body.lessonId,
