@@ -20,6 +20,7 @@ import { AppError } from "./http/app-error";
 import { apiNotFound, errorMiddleware } from "./http/error-middleware";
 import { invitationsRoutes } from "./invitations/invitations.routes";
 import { createLessonLive } from "./lessons/lessons.handlers";
+import { lessonPlansRoutes } from "./lesson-plans/lesson-plans.routes";
 import { lessonsRoutes } from "./lessons/lessons.routes";
 import { sendLessonSummary } from "./lesson-mail/lesson-summary.service";
 import type { Mailer } from "./mail/mailer";
@@ -159,6 +160,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   app.use(retentionRoutes(db, purgeSchedule));
   app.use(classesRoutes(db));
   app.use(lessonsRoutes(db, lessonLive));
+  app.use(lessonPlansRoutes(db));
   app.use(benchRoutes(db, createPhotoStore(config.uploadsDir)));
   app.use(departmentRoutes(db));
   app.use(staffRoutes(db, realtime));
