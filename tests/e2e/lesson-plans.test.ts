@@ -72,6 +72,14 @@ describe("lesson plans", () => {
     await expect.poll(() => page.getByTestId("plan-trial").nth(0).getByLabel(POT_HEIGHT).inputValue()).toBe("1.5");
     await keepScreenshot(page, "e2e", "52-plan-editor-two-trials");
 
+    // Leaving with unsaved changes asks first; staying keeps everything typed.
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Plans" }).click();
+    const leave = page.getByRole("dialog", { name: "Leave without saving?" });
+    await leave.getByRole("button", { name: "Stay on this page" }).click();
+    await leave.waitFor({ state: "hidden" });
+    expect(page.url()).toBe(`${ctx.stack.url}/plans/new`);
+    expect(await page.getByLabel("Title").inputValue()).toBe("Two drops, two chains");
+
     await page.getByRole("button", { name: "Save plan" }).click();
     await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
     const planId = page.url().split("/").at(-1)!;
