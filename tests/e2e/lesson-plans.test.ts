@@ -35,6 +35,11 @@ describe("lesson plans", () => {
     expect(await page.getByRole("button", { name: "Save changes" }).count()).toBe(0);
     expect(await page.getByTestId("plan-trial").count()).toBe(2);
     await keepScreenshot(page, "e2e", "51-plan-shared-read-only");
+    await page.getByRole("link", { name: "Lesson plans" }).click();
+    await shared.getByRole("link", { name: "Open A chain falling onto a scale" }).click();
+    await page.getByRole("heading", { name: "Trial 2 of 2: Scale rig" }).waitFor();
+    expect(await page.getByTestId("rig-preview").nth(1).getAttribute("aria-label")).toContain("A 2 m chain held just above a scale pan");
+    await keepScreenshot(page, "e2e", "55-plan-scale-read-only");
 
     // A new plan: trial 1 at 0.5 m, then 1.5 m; the theory value and the sketch follow.
     await page.goto(`${ctx.stack.url}/plans/new`);

@@ -40,13 +40,13 @@ function Floor() {
 }
 
 /** A vertical size line with its label, e.g. the drop from the rim to the floor. */
-function Measure({ x, y1, y2, label }: { x: number; y1: number; y2: number; label: string }) {
+function Measure({ x, y1, y2, label, labelSide = "right" }: { x: number; y1: number; y2: number; label: string; labelSide?: "left" | "right" }) {
   return (
     <g>
       <line x1={x} x2={x} y1={y1} y2={y2} className="stroke-ink-muted" strokeWidth={1} />
       <line x1={x - 4} x2={x + 4} y1={y1} y2={y1} className="stroke-ink-muted" strokeWidth={1} />
       <line x1={x - 4} x2={x + 4} y1={y2} y2={y2} className="stroke-ink-muted" strokeWidth={1} />
-      <text x={x + 6} y={(y1 + y2) / 2 + 4} className="fill-ink text-[10px] font-bold">
+      <text x={labelSide === "right" ? x + 6 : x - 6} y={(y1 + y2) / 2 + 4} textAnchor={labelSide === "right" ? "start" : "end"} className="fill-ink text-[10px] font-bold">
         {label}
       </text>
     </g>
@@ -61,9 +61,9 @@ function drawing(rig: RigId, shape: LinkShape, p: Record<string, number>, theory
       const drop = p.potHeight!;
       const rise = theorySi ?? 0;
       // A fixed scale up to 2.3 m, so a higher pot is drawn higher.
-      const scale = 100 / Math.max(drop + rise, 2.3);
+      const scale = 115 / Math.max(drop + rise, 2.3);
       const rimY = FLOOR_Y - drop * scale;
-      const potX = 70;
+      const potX = 60;
       const crestY = rimY - rise * scale;
       return {
         describe: `The pot ${m(drop)} above the floor, its chain's end over the rim${theory ? `; the theory's crest is marked ${theory.value.toPrecision(3)} ${theory.unit} above the rim` : ""}.`,
@@ -77,11 +77,11 @@ function drawing(rig: RigId, shape: LinkShape, p: Record<string, number>, theory
             {theory && rise > 0 ? (
               <g data-testid="preview-crest">
                 <path d={`M${potX + 8} ${rimY} C${potX + 12} ${crestY - (rimY - crestY) * 0.3} ${potX + 60} ${crestY - (rimY - crestY) * 0.3} ${potX + 80} ${FLOOR_Y}`} fill="none" strokeWidth={1.5} strokeDasharray="2 3" className="stroke-ink-muted" />
-                <line x1={potX - 20} x2={potX + 110} y1={crestY} y2={crestY} strokeWidth={1} strokeDasharray="4 3" className="stroke-ink-muted" />
-                <text x={potX + 112} y={crestY + 4} className="fill-ink-muted text-[10px]">theory crest</text>
+                <line x1={potX - 20} x2={potX + 90} y1={crestY} y2={crestY} strokeWidth={1} strokeDasharray="4 3" className="stroke-ink-muted" />
+                <text x={potX + 92} y={crestY + 4} className="fill-ink-muted text-[10px]">theory crest</text>
               </g>
             ) : null}
-            <Measure x={potX + 40} y1={rimY} y2={FLOOR_Y} label={`drop ${m(drop)}`} />
+            <Measure x={W - 12} y1={rimY} y2={FLOOR_Y} label={`drop ${m(drop)}`} labelSide="left" />
           </>
         ),
       };
