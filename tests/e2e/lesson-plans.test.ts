@@ -5,10 +5,12 @@
  * the board opens on trial 1 of 2 with the plan's set-up. A colleague's shared plan opens
  * read-only with "Duplicate to edit". Screenshots are kept as test output.
  */
+import { join } from "node:path";
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { lessons, trials } from "../../server/db/schema";
 import { keepScreenshot, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
+import { TEST_OUTPUT_DIR } from "../support/paths";
 
 const ctx = useDemoInBrowser();
 const POT_HEIGHT = "Height of the pot above the floor (m)";
@@ -66,6 +68,8 @@ describe("lesson plans", () => {
     await second.getByLabel("Offer a re-vote after the discussion").uncheck();
     await expect.poll(() => second.getByTestId("trial-theory").innerText(), { timeout: 10_000 }).toBe("13.3 cm");
     expect(await second.getByTestId("rig-preview").getAttribute("aria-label")).toContain("beads on slack threads");
+    await first.getByTestId("rig-preview").screenshot({ path: join(TEST_OUTPUT_DIR, "e2e", "56-plan-sketch-rods-1.5m.png") });
+    await second.getByTestId("rig-preview").screenshot({ path: join(TEST_OUTPUT_DIR, "e2e", "57-plan-sketch-beads-1m.png") });
 
     // Reordering by keyboard: move trial 2 up and back down; focus stays on the moved trial.
     await second.getByRole("button", { name: "Move trial 2 up" }).focus();
