@@ -26,7 +26,7 @@ function SummaryPage() {
   const query = useLessonReview(lessonId);
   useDocumentTitle(query.data ? `Summary · ${query.data.lesson.className}` : "Lesson summary");
   return (
-    <div className="min-h-dvh bg-sunken py-6 print:bg-paper print:py-0">
+    <div className="min-h-dvh bg-sunken py-6 print:min-h-0 print:bg-paper print:py-0">
       <div className="mx-auto mb-4 flex w-[186mm] max-w-full flex-wrap items-center justify-between gap-3 print:hidden">
         <ButtonLink to={`/lessons/${lessonId}/review`} variant="quiet" icon={<ArrowLeftIcon />} className="-ml-3">
           Back to the review
@@ -35,7 +35,7 @@ function SummaryPage() {
           Print
         </Button>
       </div>
-      <main className="mx-auto w-[186mm] max-w-full bg-paper p-[6mm] shadow-card print:w-auto print:p-0 print:shadow-none">
+      <main className="mx-auto w-[186mm] max-w-full bg-paper p-[6mm] shadow-card print:p-0 print:shadow-none">
         {query.isPending ? (
           <SkeletonList rows={3} label="Loading the summary…" />
         ) : query.isError ? (
