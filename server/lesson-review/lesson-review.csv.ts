@@ -85,6 +85,7 @@ const inUnitColumns = (units: string[], unit: string, value: number | null): Csv
 /**
  * One row per prediction from a pupil's device (a show of hands has no pupil: its answers are
  * counted in the results export). Numbers in the question's unit, named in the column header.
+ * The pupil's explanation of the trial is on each of their rows for it (so on the re-vote row too).
  */
 export function predictionsCsv(review: LessonReview): string {
   const units = unitsOf(review);
@@ -99,6 +100,7 @@ export function predictionsCsv(review: LessonReview): string {
     ...units.map((u) => `prediction${unitSuffix(u)}`),
     "choice",
     "reason",
+    "explanation",
     ...units.map((u) => `result${unitSuffix(u)}`),
     ...units.map((u) => `theory${unitSuffix(u)}`),
     "relative error (%)",
@@ -120,6 +122,10 @@ export function predictionsCsv(review: LessonReview): string {
         ...inUnitColumns(units, unit, p.value),
         p.choiceLabel,
         p.reason,
+        t.explanations
+          .filter((e) => e.participantId === p.participantId)
+          .map((e) => e.text)
+          .join(" / "),
         ...inUnitColumns(units, unit, sig(t.result?.value)),
         ...inUnitColumns(units, unit, sig(t.theory?.value)),
         percent(p.closeness?.signedRelativeError),

@@ -178,6 +178,8 @@ describe("the CSV exports", () => {
     expect(parsed.data[1]!["prediction (cm)"]).toBe("-0.5");
     expect(text).toContain(",-0.5,");
     expect(parsed.data[2]!.reason).toBe('The pile pushes it up, "like a spring", I think');
+    // Explanations are on their pupil's rows, neutralised too.
+    expect(parsed.data.map((r) => r.explanation)).toEqual(["'=1+1 is what the pile adds.", "The links are jerked up off the pile.", "", "'=1+1 is what the pile adds.", ""]);
     expect(parsed.data[0]!["result (cm)"]).toBe("14.3");
     expect(parsed.data[0]!["relative error (%)"]).toBe("-16.1"); // (12 − 14.3)/14.3 = −16.08 %
     expect(parsed.data[4]!["prediction (mm)"]).toBe("210");
