@@ -39,6 +39,8 @@ describe("reviewing a finished lesson in the browser", () => {
     await page.waitForURL(/\/lessons\/[0-9a-f-]+\/review$/);
     await page.getByRole("heading", { name: "Trial 1: Fountain rig" }).waitFor();
     await page.getByTestId("trial-graph-canvas").first().waitFor();
+    // Two fountain trials: the series graph across the lesson too.
+    await page.getByRole("heading", { name: "Across the lesson" }).waitFor();
     await keepScreenshot(page, "e2e", "61-lesson-review");
 
     // Sorting trial 1's predictions by answer, with a click: numbers in order, aria-sort set.

@@ -9,7 +9,8 @@ import { LessonReviewView } from "@/features/lesson-review/components/lesson-rev
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { isApiError } from "@/lib/api-client";
 import { RequireRole } from "../layouts/require-role";
-import { reviewGraph } from "../review/review-graph";
+import { ReviewSeriesGraph, reviewGraph } from "../review/review-graph";
+import { seriesOf } from "../review/review-series";
 
 export function Component() {
   return (
@@ -42,5 +43,6 @@ function ReviewPage() {
       </div>
     );
   }
-  return <LessonReviewView review={query.data} renderGraph={reviewGraph} />;
+  const series = seriesOf(query.data).trials.length > 1 ? <ReviewSeriesGraph review={query.data} /> : null;
+  return <LessonReviewView review={query.data} renderGraph={reviewGraph} seriesGraph={series} />;
 }

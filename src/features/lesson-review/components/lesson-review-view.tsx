@@ -15,7 +15,12 @@ import { TrialReview } from "./trial-review";
  * The teacher's review of one lesson: per trial, then per pupil. The comparison graph comes
  * from the page (`renderGraph`), which composes it from the graph feature.
  */
-export function LessonReviewView({ review, renderGraph }: { review: LessonReview; renderGraph: (trial: ReviewTrial) => ReactNode }) {
+export function LessonReviewView({ review, renderGraph, seriesGraph }: {
+  review: LessonReview;
+  renderGraph: (trial: ReviewTrial) => ReactNode;
+  /** Across the lesson's trials (the app gives it for a fountain lesson; null otherwise). */
+  seriesGraph?: ReactNode;
+}) {
   const { lesson } = review;
   return (
     <>
@@ -61,6 +66,11 @@ export function LessonReviewView({ review, renderGraph }: { review: LessonReview
           {review.trials.map((t) => (
             <TrialReview key={t.id} trial={t} graph={renderGraph(t)} />
           ))}
+          {seriesGraph ? (
+            <Section title="Across the lesson" description="Each fountain trial's predictions and result against the pot height, with the theory line and the class's real runs.">
+              {seriesGraph}
+            </Section>
+          ) : null}
           <Section title="Pupil by pupil" description="Each pupil’s predictions across the lesson, and how close each was to the simulated result.">
             {review.pupils.length === 0 ? <EmptyState title="No pupils joined this lesson." /> : <PupilsTable review={review} />}
           </Section>
