@@ -15,6 +15,7 @@ const roster = DEMO_CLASSES.find((c) => c.name === DEMO_PAST_LESSON.className)!.
 const pupils = roster.slice(0, DEMO_PAST_LESSON.trials[0].answers.length);
 const ctx = useDemoInBrowser();
 
+let reviewPath = "";
 const numbersIn = (texts: string[]) => texts.map((t) => Number(t.replace("−", "-").replace(/[^\d.-]/g, "")));
 
 describe("reviewing a finished lesson in the browser", () => {
@@ -37,6 +38,7 @@ describe("reviewing a finished lesson in the browser", () => {
 
     await firstRow.getByRole("link", { name: /^Review the lesson of/ }).click();
     await page.waitForURL(/\/lessons\/[0-9a-f-]+\/review$/);
+    reviewPath = new URL(page.url()).pathname;
     await page.getByRole("heading", { name: "Trial 1: Fountain rig" }).waitFor();
     await page.getByTestId("trial-graph-canvas").first().waitFor();
     // Two fountain trials: the series graph across the lesson too.
@@ -68,11 +70,11 @@ describe("reviewing a finished lesson in the browser", () => {
     // Filtering trial 2 (it had a re-vote): by name, then by round.
     const second = page.getByTestId("predictions-table").nth(1);
     const firstName = pupils[0]!.split(" ")[0]!;
-    await page.getByLabel("Find a pupil").nth(1).fill(firstName.toUpperCase());
+    await page.getByLabel("Find a pupil in trial 2").fill(firstName.toUpperCase());
     const filtered = await second.locator("tbody tr td:nth-child(1)").allInnerTexts();
     expect(filtered).toEqual([pupils[0], pupils[0]]);
-    await page.getByLabel("Find a pupil").nth(1).fill("");
-    await page.getByLabel("Round").selectOption("2");
+    await page.getByLabel("Find a pupil in trial 2").fill("");
+    await page.getByLabel("Round (trial 2)").selectOption("2");
     const rounds = await second.locator("tbody tr td:nth-child(2)").allInnerTexts();
     expect(rounds.length).toBe(DEMO_PAST_LESSON.trials[1].revote!.filter((v) => v !== null).length);
     expect(new Set(rounds)).toEqual(new Set(["Re-vote"]));
@@ -115,6 +117,29 @@ describe("reviewing a finished lesson in the browser", () => {
     expect(pages.length).toBe(1);
 
     expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("fits a phone screen (tables scroll inside their frame), and the head of department cannot open it", async () => {
+    expect(reviewPath).toMatch(/^\/lessons\/[0-9a-f-]+\/review$/);
+    const phone = await ctx.browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
+    const page = await phone.newPage();
+    await signInAs(page, ctx.stack.url, teacher.displayName);
+    await page.goto(`${ctx.stack.url}${reviewPath}`);
+    await page.getByRole("heading", { name: "Trial 1: Fountain rig" }).waitFor();
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    await keepScreenshot(page, "e2e", "66-review-phone");
+    expect(overflow).toBeLessThanOrEqual(0);
+    await phone.close();
+
+    const head = DEMO_STAFF.find((s) => s.key === "head")!;
+    const { context, page: headPage } = await watchedPage(ctx.browser, ctx.stack.url);
+    await signInAs(headPage, ctx.stack.url, head.displayName);
+    await headPage.goto(`${ctx.stack.url}${reviewPath}`);
+    await headPage.getByRole("heading", { name: "Lesson not found" }).waitFor();
+    const text = await headPage.locator("main").innerText();
+    for (const name of pupils) expect(text).not.toContain(name);
+    await keepScreenshot(headPage, "e2e", "67-review-refused-to-head");
     await context.close();
   });
 });

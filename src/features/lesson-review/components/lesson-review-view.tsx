@@ -62,13 +62,14 @@ export function LessonReviewView({ review, renderGraph, seriesGraph }: {
       {review.trials.length === 0 ? (
         <EmptyState title="This lesson has no trials." />
       ) : (
-        <div className="grid gap-6">
+        <div className="grid gap-6 [&>*]:min-w-0">
           {review.trials.map((t) => (
             <TrialReview key={t.id} trial={t} graph={renderGraph(t)} />
           ))}
           {seriesGraph ? (
             <Section title="Across the lesson" description="Each fountain trial's predictions and result against the pot height, with the theory line and the class's real runs.">
-              {seriesGraph}
+              {/* Clips the graph's screen-reader table (a table ignores its own overflow) on narrow screens. */}
+              <div className="relative overflow-hidden">{seriesGraph}</div>
             </Section>
           ) : null}
           <Section title="Pupil by pupil" description="Each pupil’s predictions across the lesson, and how close each was to the simulated result.">

@@ -73,7 +73,7 @@ export function LessonSummarySheet({ review, renderGraph }: { review: LessonRevi
         return (
           <section key={t.id} className="grid grid-cols-[3fr_2fr] gap-3 break-inside-avoid border-b border-line pb-2" aria-label={`Trial ${t.position}`}>
             {/* Graph only: its own caption of figures is hidden here, the figures are beside it. */}
-            <div className="[&_[data-testid=trial-graph-summary]]:hidden [&_[data-testid=trial-graph]>div:first-child]:h-52">{renderGraph(t)}</div>
+            <div className="relative overflow-hidden [&_[data-testid=trial-graph-summary]]:hidden [&_[data-testid=trial-graph]>div:first-child]:h-52">{renderGraph(t)}</div>
             <div className="grid content-start gap-1">
               <h2 className="text-base font-bold">
                 Trial {t.position}: {t.rigLabel}

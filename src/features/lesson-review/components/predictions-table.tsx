@@ -1,4 +1,4 @@
-import { useId, useMemo, useState } from "react";
+import { useMemo, useState } from "react";
 import type { ReviewTrial } from "@contracts/lesson-review";
 import { SelectField, TextField } from "@/components/ui/field";
 import {
@@ -21,7 +21,6 @@ export function PredictionsTable({ trial }: { trial: ReviewTrial }) {
   const [sort, setSort] = useState<SortState<PredictionColumn> | null>(null);
   const [search, setSearch] = useState("");
   const [round, setRound] = useState<RoundFilter>("all");
-  const statusId = useId();
   const hasRevote = trial.predictions.some((p) => p.round === 2);
   const unit = trial.question.unit;
 
@@ -34,24 +33,23 @@ export function PredictionsTable({ trial }: { trial: ReviewTrial }) {
   const header = (column: PredictionColumn, label: string) => <SortableHeader column={column} label={label} sort={sort} onSort={onSort} />;
 
   return (
-    <div className="grid gap-3">
+    <div className="grid gap-3 [&>*]:min-w-0">
       <div className="flex flex-wrap items-end gap-3">
         <TextField
-          label="Find a pupil"
+          label={`Find a pupil in trial ${trial.position}`}
           type="search"
           value={search}
           onChange={(e) => setSearch(e.target.value)}
           wrapperClassName="w-full sm:w-64"
-          aria-controls={statusId}
         />
         {hasRevote ? (
-          <SelectField label="Round" value={round} onChange={(e) => setRound(e.target.value as RoundFilter)} wrapperClassName="w-full sm:w-48">
+          <SelectField label={`Round (trial ${trial.position})`} value={round} onChange={(e) => setRound(e.target.value as RoundFilter)} wrapperClassName="w-full sm:w-48">
             <option value="all">Both rounds</option>
             <option value="1">Before the run</option>
             <option value="2">Re-vote</option>
           </SelectField>
         ) : null}
-        <p id={statusId} role="status" className="pb-3 text-sm text-ink-muted">
+        <p role="status" className="pb-3 text-sm text-ink-muted">
           Showing {rows.length} of {trial.predictions.length} prediction{trial.predictions.length === 1 ? "" : "s"}
         </p>
       </div>

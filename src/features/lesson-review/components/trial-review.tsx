@@ -51,8 +51,8 @@ export function TrialReview({ trial, graph }: { trial: ReviewTrial; graph: React
         </>
       }
     >
-      <div className="grid gap-6">
-        <div className="grid gap-6 md:grid-cols-2">
+      <div className="grid gap-6 [&>*]:min-w-0">
+        <div className="grid gap-6 md:grid-cols-2 [&>*]:min-w-0">
           <div>
             <h3 className="mb-2 font-bold">Set-up</h3>
             <TrialParams trial={trial} />
@@ -63,7 +63,7 @@ export function TrialReview({ trial, graph }: { trial: ReviewTrial; graph: React
             {trial.rig === "fountain" && trial.result ? <p className="mt-2 text-sm text-ink-muted">{CALIBRATED_PILE_NOTE}</p> : null}
           </div>
         </div>
-        {trial.predictions.length > 0 || trial.tally[1] || trial.tally[2] ? graph : null}
+        {trial.predictions.length > 0 || trial.tally[1] || trial.tally[2] ? <div className="relative overflow-hidden">{graph}</div> : null}
         <div>
           <h3 className="mb-2 text-lg font-bold">Predictions</h3>
           {trial.tally[1] || trial.tally[2] ? (
