@@ -331,7 +331,11 @@ export interface LessonListItem {
   startedAt: string;
   endedAt: string | null;
   trialCount: number;
+  /** Trials with a recorded result. */
+  trialsRun: number;
   participantCount: number;
+  /** The plan the lesson started from, as titled then (null: no plan). */
+  planTitle: string | null;
 }
 
 /** The signed-in teacher's lessons still open (to get back to the board). */

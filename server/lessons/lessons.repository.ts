@@ -113,7 +113,9 @@ export async function lessonsOfClass(db: Reader, classId: string) {
       startedAt: lessons.startedAt,
       endedAt: lessons.endedAt,
       trialCount: sql<number>`(select count(*)::int from trials t where t.lesson_id = lessons.id)`,
+      trialsRun: sql<number>`(select count(*)::int from trials t where t.lesson_id = lessons.id and t.ran_at is not null)`,
       participantCount: sql<number>`(select count(*)::int from lesson_participants lp where lp.lesson_id = lessons.id)`,
+      planTitle: lessons.planTitle,
     })
     .from(lessons)
     .where(eq(lessons.classId, classId))

@@ -70,12 +70,14 @@ function inQuestionUnit(trial: TrialRow, si: number | undefined, uncertainty: nu
   return { value: si * per, uncertainty: uncertainty === null ? null : uncertainty * per, unit: trial.question.unit };
 }
 
-function resultOf(trial: TrialRow): ShownValue | null {
+/** The measured result in the question's unit (null before a run). */
+export function resultOf(trial: TrialRow): ShownValue | null {
   const settled = trial.measured?.[trial.question.quantity];
   return settled ? inQuestionUnit(trial, settled.value, settled.uncertainty) : null;
 }
 
-function theoryOf(trial: TrialRow): ShownValue | null {
+/** The closed-form value in the question's unit (null where the theory gives none). */
+export function theoryOf(trial: TrialRow): ShownValue | null {
   return trial.theory ? inQuestionUnit(trial, trial.theory[trial.question.quantity], null) : null;
 }
 

@@ -26,6 +26,7 @@ export function createRouter() {
           children: [
             { path: "lessons/:lessonId/board", lazy: lazyPage(() => import("./routes/lesson-board")), ErrorBoundary: RouteErrorBoundary },
             { path: "lessons/:lessonId/remote", lazy: lazyPage(() => import("./routes/lesson-remote")), ErrorBoundary: RouteErrorBoundary },
+            { path: "lessons/:lessonId/summary", lazy: lazyPage(() => import("./routes/lesson-summary")), ErrorBoundary: RouteErrorBoundary },
           ],
         },
         {
@@ -38,6 +39,7 @@ export function createRouter() {
             { path: "plans", lazy: lazyPage(() => import("./routes/plans")), ErrorBoundary: RouteErrorBoundary },
             { path: "plans/new", lazy: lazyPage(() => import("./routes/plan-edit")), ErrorBoundary: RouteErrorBoundary },
             { path: "plans/:planId", lazy: lazyPage(() => import("./routes/plan-edit")), ErrorBoundary: RouteErrorBoundary },
+            { path: "lessons/:lessonId/review", lazy: lazyPage(() => import("./routes/lesson-review")), ErrorBoundary: RouteErrorBoundary },
             { path: "department", lazy: lazyPage(() => import("./routes/department")), ErrorBoundary: RouteErrorBoundary },
             { path: "staff", lazy: lazyPage(() => import("./routes/staff")), ErrorBoundary: RouteErrorBoundary },
             { path: "pupil-data", lazy: lazyPage(() => import("./routes/pupil-data")), ErrorBoundary: RouteErrorBoundary },

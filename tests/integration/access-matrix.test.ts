@@ -1,5 +1,5 @@
 /**
- * Every class, bench-data, live-lesson, lesson-plan, department, staff, invitation, pupil-data and captured-mail route against every
+ * Every class, bench-data, live-lesson, lesson-plan, lesson-review, department, staff, invitation, pupil-data and captured-mail route against every
  * kind of caller. Teacher A owns the
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
@@ -163,6 +163,15 @@ const ROUTES: RouteCase[] = [
     path: (_f, caller) => `/api/lesson-plans/${caller === "teacherA" ? made.sparePlanId : made.planId}`,
     expected: { ...sharedPlan(403), teacherA: 204 },
   },
+  // The review and its exports carry pupils' names: the lesson's own teacher only (the head sees the class, so 403).
+  { route: "GET /api/lessons/:id/review", method: "GET", path: () => `/api/lessons/${made.lessonId}/review`, expected: ownerOnly(200) },
+  {
+    route: "GET /api/lessons/:id/exports/predictions.csv",
+    method: "GET",
+    path: () => `/api/lessons/${made.lessonId}/exports/predictions.csv`,
+    expected: ownerOnly(200),
+  },
+  { route: "GET /api/lessons/:id/exports/results.csv", method: "GET", path: () => `/api/lessons/${made.lessonId}/exports/results.csv`, expected: ownerOnly(200) },
   {
     route: "GET /api/department/classes",
     method: "GET",

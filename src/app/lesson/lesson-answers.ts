@@ -9,7 +9,7 @@ export interface AnonymousAnswer {
 }
 
 /** Every answer of a trial without names: the pupils' own and what a show of hands gave. */
-export function anonymousAnswers(trial: Pick<TeacherTrial, "predictions" | "tally">): AnonymousAnswer[] {
+export function anonymousAnswers(trial: { predictions: readonly AnonymousAnswer[]; tally: TeacherTrial["tally"] }): AnonymousAnswer[] {
   const answers: AnonymousAnswer[] = trial.predictions.map((p) => ({ round: p.round, value: p.value, choice: p.choice }));
   for (const round of [1, 2] as const) {
     const tally = trial.tally[round];

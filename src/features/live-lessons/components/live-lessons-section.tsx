@@ -83,17 +83,31 @@ export function LiveLessonsSection({ item, plans = [] }: {
           <p>No lessons with this class yet.</p>
         </div>
       ) : (
-        <ul className="grid gap-3" aria-label="Lessons, newest first">
-          {lessons.data.map((lesson) => (
-            <LessonRow
-              key={lesson.id}
-              lesson={lesson}
-              owner={owner}
-              runAgain={canStart && lesson.status === "ended" && lesson.trialCount > 0 ? () => onStart({ fromLessonId: lesson.id }) : null}
-              starting={start.isPending && start.variables?.fromLessonId === lesson.id}
-            />
-          ))}
-        </ul>
+        <div className="overflow-x-auto rounded-control border border-line">
+          <table className="w-full min-w-[36rem] text-left" data-testid="class-lessons">
+            <caption className="sr-only">The class’s lessons, newest first</caption>
+            <thead className="bg-sunken text-sm">
+              <tr>
+                <th scope="col" className="px-3 py-2">Date</th>
+                <th scope="col" className="px-3 py-2">Plan</th>
+                <th scope="col" className="px-3 py-2">Trials run</th>
+                <th scope="col" className="px-3 py-2">Pupils taking part</th>
+                <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th>
+              </tr>
+            </thead>
+            <tbody>
+              {lessons.data.map((lesson) => (
+                <LessonRow
+                  key={lesson.id}
+                  lesson={lesson}
+                  owner={owner}
+                  runAgain={canStart && lesson.status === "ended" && lesson.trialCount > 0 ? () => onStart({ fromLessonId: lesson.id }) : null}
+                  starting={start.isPending && start.variables?.fromLessonId === lesson.id}
+                />
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </Section>
   );
@@ -107,30 +121,42 @@ function LessonRow({ lesson, owner, runAgain, starting }: {
   starting: boolean;
 }) {
   const open = lesson.status === "open";
+  const date = formatLessonDate(lesson.startedAt);
   return (
-    <li className="flex flex-wrap items-center justify-between gap-3 rounded-control border border-line px-4 py-3">
-      <div className="min-w-0">
-        <p className="font-bold">
-          {formatLessonDate(lesson.startedAt)}{" "}
-          {open ? <Badge tone="accent">Open · code {lesson.code}</Badge> : null}
-        </p>
-        <p className="text-ink-muted">
-          {lesson.trialCount} trial{lesson.trialCount === 1 ? "" : "s"} · {lesson.participantCount} pupil
-          {lesson.participantCount === 1 ? "" : "s"} took part
-        </p>
-      </div>
-      {open && owner ? (
-        <div className="flex flex-wrap gap-2">
-          <ButtonLink to={`/lessons/${lesson.id}/board`} variant="primary">
-            Open the board
-          </ButtonLink>
-          <ButtonLink to={`/lessons/${lesson.id}/remote`}>Remote</ButtonLink>
-        </div>
-      ) : runAgain ? (
-        <Button busy={starting} onClick={runAgain} aria-label={`Start a new lesson with the trials of ${formatLessonDate(lesson.startedAt)}`}>
-          Start again with these trials
-        </Button>
-      ) : null}
-    </li>
+    <tr className="border-t border-line align-top">
+      <th scope="row" className="px-3 py-2 text-left">
+        {date} {open ? <Badge tone="accent">Open · code {lesson.code}</Badge> : null}
+      </th>
+      <td className="px-3 py-2 [overflow-wrap:anywhere]">{lesson.planTitle ?? <span className="text-ink-muted">No plan</span>}</td>
+      <td className="px-3 py-2">
+        {lesson.trialsRun}
+        {lesson.trialsRun !== lesson.trialCount ? <span className="text-ink-muted"> of {lesson.trialCount}</span> : null}
+      </td>
+      <td className="px-3 py-2">{lesson.participantCount}</td>
+      <td className="px-3 py-2">
+        {/* The review shows pupils' names: only the lesson's teacher (the class's owner) opens it. */}
+        {owner ? (
+          <div className="flex flex-wrap justify-end gap-2">
+            {open ? (
+              <>
+                <ButtonLink to={`/lessons/${lesson.id}/board`} variant="primary">
+                  Back to the board
+                </ButtonLink>
+                <ButtonLink to={`/lessons/${lesson.id}/remote`}>Remote</ButtonLink>
+              </>
+            ) : (
+              <ButtonLink to={`/lessons/${lesson.id}/review`} variant="primary" aria-label={`Review the lesson of ${date}`}>
+                Review
+              </ButtonLink>
+            )}
+            {runAgain ? (
+              <Button busy={starting} onClick={runAgain} aria-label={`Start a new lesson with the trials of ${date}`}>
+                Start again with these trials
+              </Button>
+            ) : null}
+          </div>
+        ) : null}
+      </td>
+    </tr>
   );
 }

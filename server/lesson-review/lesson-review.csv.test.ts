@@ -1,0 +1,113 @@
+import Papa from "papaparse";
+import { describe, expect, it } from "vitest";
+import type { LessonReview, ReviewTrial, RoundSummary } from "../contracts/lesson-review";
+import { exportFileName, neutraliseCell, predictionsCsv, resultsCsv, toCsv } from "./lesson-review.csv";
+
+const parse = (csv: string) => Papa.parse<Record<string, string>>(csv, { header: true, skipEmptyLines: true });
+
+describe("neutralising CSV cells against formulas (OWASP \"CSV Injection\", common practice)", () => {
+  it("prefixes an apostrophe to text starting with = + - @ tab or carriage return", () => {
+    expect(neutraliseCell("=1+1")).toBe("'=1+1");
+    expect(neutraliseCell("+44 text")).toBe("'+44 text");
+    expect(neutraliseCell("-5 cm, I think")).toBe("'-5 cm, I think");
+    expect(neutraliseCell("@SUM(A1)")).toBe("'@SUM(A1)");
+    expect(neutraliseCell("\t=2")).toBe("'\t=2");
+    expect(neutraliseCell("\r=2")).toBe("'\r=2");
+    // A formula followed by a line break is still caught (a `.*$` pattern would miss it).
+    expect(neutraliseCell("=HYPERLINK(\"x\")\nmore")).toBe("'=HYPERLINK(\"x\")\nmore");
+  });
+
+  it("leaves other text alone, including a formula character later in the text", () => {
+    expect(neutraliseCell("It rises 1+1 cm")).toBe("It rises 1+1 cm");
+    expect(neutraliseCell("Sam K.")).toBe("Sam K.");
+    expect(neutraliseCell("")).toBe("");
+  });
+
+  it("keeps numbers numeric, negative ones included: a number cell is never prefixed", () => {
+    expect(neutraliseCell(-0.5)).toBe(-0.5);
+    expect(neutraliseCell(12)).toBe(12);
+    expect(neutraliseCell(Number.NaN)).toBe("");
+    expect(neutraliseCell(null)).toBe("");
+  });
+
+  it("writes a BOM, a header and quoted cells that read back the same through papaparse", () => {
+    const csv = toCsv(["pupil", "prediction (cm)", "reason"], [["Zoë A.", -0.5, 'He said "up", then, =1+1'], ["Ana B.", 12.5, "=1+1"]]);
+    expect(csv.startsWith("\ufeffpupil,prediction (cm),reason\r\n")).toBe(true);
+    // The negative number is written bare, so a spreadsheet reads it as a number.
+    expect(csv).toContain("Zoë A.,-0.5,");
+    const back = parse(csv);
+    expect(back.errors).toEqual([]);
+    expect(back.data).toEqual([
+      { pupil: "Zoë A.", "prediction (cm)": "-0.5", reason: 'He said "up", then, =1+1' },
+      { pupil: "Ana B.", "prediction (cm)": "12.5", reason: "'=1+1" },
+    ]);
+  });
+});
+
+const summary = (round: 1 | 2, count: number, median: number | null, within10: number | null): RoundSummary => ({
+  round,
+  count,
+  median,
+  lowerQuartile: null,
+  upperQuartile: null,
+  spread: null,
+  min: null,
+  max: null,
+  within10,
+  choiceCounts: null,
+});
+
+function trial(position: number, unit: string, potHeight: number, result: number | null): ReviewTrial {
+  return {
+    id: `t${position}`,
+    position,
+    rig: "fountain",
+    rigLabel: "Fountain rig",
+    quantityLabel: "Rise of the chain above the rim",
+    shownParams: [{ key: "potHeight", label: "Height of the pot above the floor", unit: "m", value: potHeight }],
+    question: { kind: "number", prompt: "How high?", quantity: "rise", unit, askReason: true, askExplanation: true, revote: true },
+    ranAt: result === null ? null : "2026-11-30T09:20:00.000Z",
+    result: result === null ? null : { value: result, uncertainty: 0.8, unit },
+    theory: result === null ? null : { value: 13.4567891, uncertainty: null, unit },
+    predictions: [],
+    explanations: [],
+    tally: { 1: null, 2: null },
+    summary: { 1: summary(1, 0, null, null), 2: summary(2, 0, null, null) },
+  };
+}
+
+const review = (trials: ReviewTrial[]): LessonReview => ({
+  lesson: { id: "l", classId: "c", className: "11X Physíçs / set 2", code: "HKT4MP", status: "ended", startedAt: "2026-11-30T09:05:00.000Z", endedAt: null, planTitle: null },
+  participants: [],
+  trials,
+  pupils: [],
+});
+
+describe("the exports", () => {
+  it("name value columns with their unit, one column per unit the lesson used, and keep numbers in the unit's column", () => {
+    const a = trial(1, "cm", 1, 14.3);
+    a.predictions = [
+      { id: "p1", participantId: "x", pupil: "Ana B.", round: 1, value: 12, choice: null, choiceLabel: null, reason: "-it drops", closeness: { signedRelativeError: -0.16083916, absoluteRelativeError: 0.16083916, within10: false }, submittedAt: "2026-11-30T09:10:00.000Z" },
+    ];
+    const b = trial(2, "mm", 1.5, null);
+    b.predictions = [
+      { id: "p2", participantId: "x", pupil: "Ana B.", round: 1, value: -0.5, choice: null, choiceLabel: null, reason: "", closeness: null, submittedAt: "2026-11-30T09:30:00.000Z" },
+    ];
+    const back = parse(predictionsCsv(review([a, b])));
+    expect(back.meta.fields).toEqual(expect.arrayContaining(["prediction (cm)", "prediction (mm)", "result (cm)", "theory (cm)", "height of the pot above the floor (m)"]));
+    expect(back.data[0]).toMatchObject({ "prediction (cm)": "12", "prediction (mm)": "", reason: "'-it drops", "result (cm)": "14.3", "theory (cm)": "13.4568", "relative error (%)": "-16.1", "within 10 %": "no" });
+    expect(back.data[1]).toMatchObject({ "prediction (cm)": "", "prediction (mm)": "-0.5", "result (mm)": "", "within 10 %": "" });
+  });
+
+  it("give one results row per trial, run or not", () => {
+    const back = parse(resultsCsv(review([trial(1, "cm", 1, 14.3), trial(2, "cm", 1.5, null)])));
+    expect(back.data.map((r) => [r.trial, r["height of the pot above the floor (m)"], r["result (cm)"]])).toEqual([
+      ["1", "1", "14.3"],
+      ["2", "1.5", ""],
+    ]);
+  });
+
+  it("name the file after the class and the date in plain ASCII", () => {
+    expect(exportFileName(review([]), "predictions")).toBe("11X-Physics-set-2-2026-11-30-predictions.csv");
+  });
+});

@@ -1,0 +1,199 @@
+import Papa from "papaparse";
+import type { LessonReview, ReviewTrial } from "../contracts/lesson-review";
+
+export type CsvCell = string | number | null;
+
+/**
+ * Characters that make a spreadsheet read a text cell as a formula (or, for tab and carriage
+ * return, hide one after them): common practice per OWASP "CSV Injection". Tested at the
+ * start of the cell only, across line breaks too (papaparse's own option misses "=1+1\n…").
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/**
+ * Makes one cell safe to open in a spreadsheet. Our choice: numbers stay numbers. A cell that
+ * holds a JavaScript number is written as that number ("-0.5"), never prefixed: it was made
+ * by our code from a finite number, so it can only be digits, a sign, a point and an exponent,
+ * and a spreadsheet reads "-0.5" as minus a half, not a formula. Only text cells (names,
+ * reasons, explanations, labels, anything a person typed) that start with = + - @ tab or CR get
+ * a leading apostrophe, so "=1+1" arrives as the text '=1+1 and "-5 cm" as '-5 cm. Non-finite
+ * numbers and null become empty cells.
+ */
+export function neutraliseCell(cell: CsvCell): string | number {
+  if (cell === null) return "";
+  if (typeof cell === "number") return Number.isFinite(cell) ? cell : "";
+  return FORMULA_START.test(cell) ? `'${cell}` : cell;
+}
+
+/**
+ * CSV text: header row, CRLF line ends (RFC 4180), quoting by papaparse's `unparse`, every cell
+ * neutralised first. Starts with a UTF-8 byte order mark: without it Excel on Windows reads a
+ * download as the local code page and garbles names such as "Zoë"; LibreOffice, Google Sheets
+ * and papaparse all skip the mark.
+ */
+export function toCsv(header: string[], rows: CsvCell[][]): string {
+  return (
+    "\ufeff" +
+    Papa.unparse(
+      { fields: header.map((h) => neutraliseCell(h) as string), data: rows.map((r) => r.map(neutraliseCell)) },
+      { newline: "\r\n", escapeFormulae: false },
+    ) +
+    "\r\n"
+  );
+}
+
+/** Six significant figures: measured and theory values carry more digits than they mean. */
+const sig = (v: number | null | undefined): number | null => (v === null || v === undefined || !Number.isFinite(v) ? null : Number(v.toPrecision(6)));
+/** A relative error as a percentage with one decimal. */
+const percent = (e: number | null | undefined): number | null => (e === null || e === undefined ? null : Math.round(e * 1000) / 10);
+const unitSuffix = (unit: string) => (unit ? ` (${unit})` : "");
+
+/** The lesson's number-question units in order of first use: one value column per unit, named with it. */
+function unitsOf(review: LessonReview): string[] {
+  const units: string[] = [];
+  for (const t of review.trials) if (!units.includes(t.question.unit)) units.push(t.question.unit);
+  return units;
+}
+
+interface ParamColumn {
+  key: string;
+  unit: string;
+  header: string;
+}
+
+/** Every parameter any trial used, once, named with its unit ("height of the pot above the floor (m)"). */
+function paramColumnsOf(review: LessonReview): ParamColumn[] {
+  const columns: ParamColumn[] = [];
+  for (const t of review.trials) {
+    for (const p of t.shownParams) {
+      if (columns.some((c) => c.key === p.key && c.unit === p.unit)) continue;
+      columns.push({ key: p.key, unit: p.unit, header: `${p.label.charAt(0).toLowerCase()}${p.label.slice(1)}${unitSuffix(p.unit)}` });
+    }
+  }
+  return columns;
+}
+
+const paramCells = (trial: ReviewTrial, columns: ParamColumn[]): CsvCell[] =>
+  columns.map((c) => {
+    const p = trial.shownParams.find((x) => x.key === c.key && x.unit === c.unit);
+    return p === undefined ? null : p.value;
+  });
+
+/** Per unit: this trial's value in the column of its own unit, empty in the others. */
+const inUnitColumns = (units: string[], unit: string, value: number | null): CsvCell[] => units.map((u) => (u === unit ? value : null));
+
+/**
+ * One row per prediction from a pupil's device (a show of hands has no pupil: its answers are
+ * counted in the results export). Numbers in the question's unit, named in the column header.
+ * The pupil's explanation of the trial is on each of their rows for it (so on the re-vote row too).
+ */
+export function predictionsCsv(review: LessonReview): string {
+  const units = unitsOf(review);
+  const params = paramColumnsOf(review);
+  const header = [
+    "trial",
+    "rig",
+    "question",
+    ...params.map((c) => c.header),
+    "pupil",
+    "round",
+    ...units.map((u) => `prediction${unitSuffix(u)}`),
+    "choice",
+    "reason",
+    "explanation",
+    ...units.map((u) => `result${unitSuffix(u)}`),
+    ...units.map((u) => `theory${unitSuffix(u)}`),
+    "relative error (%)",
+    "absolute relative error (%)",
+    "within 10 %",
+    "submitted at (UTC)",
+  ];
+  const rows: CsvCell[][] = [];
+  for (const t of review.trials) {
+    const unit = t.question.unit;
+    for (const p of t.predictions) {
+      rows.push([
+        t.position,
+        t.rigLabel,
+        t.question.prompt,
+        ...paramCells(t, params),
+        p.pupil,
+        p.round === 1 ? "before the run" : "re-vote",
+        ...inUnitColumns(units, unit, p.value),
+        p.choiceLabel,
+        p.reason,
+        t.explanations
+          .filter((e) => e.participantId === p.participantId)
+          .map((e) => e.text)
+          .join(" / "),
+        ...inUnitColumns(units, unit, sig(t.result?.value)),
+        ...inUnitColumns(units, unit, sig(t.theory?.value)),
+        percent(p.closeness?.signedRelativeError),
+        percent(p.closeness?.absoluteRelativeError),
+        p.closeness ? (p.closeness.within10 ? "yes" : "no") : null,
+        p.submittedAt,
+      ]);
+    }
+  }
+  return toCsv(header, rows);
+}
+
+/** One row per trial: set-up, result, theory, and the class's answers in totals (devices and show of hands). */
+export function resultsCsv(review: LessonReview): string {
+  const units = unitsOf(review);
+  const params = paramColumnsOf(review);
+  const header = [
+    "trial",
+    "rig",
+    "question",
+    ...params.map((c) => c.header),
+    ...units.map((u) => `result${unitSuffix(u)}`),
+    ...units.map((u) => `result uncertainty${unitSuffix(u)}`),
+    ...units.map((u) => `theory${unitSuffix(u)}`),
+    "answers before the run",
+    ...units.map((u) => `median before the run${unitSuffix(u)}`),
+    ...units.map((u) => `spread before the run (interquartile range)${unitSuffix(u)}`),
+    "within 10 % before the run",
+    "answers in the re-vote",
+    ...units.map((u) => `median in the re-vote${unitSuffix(u)}`),
+    "within 10 % in the re-vote",
+    "explanations",
+    "run at (UTC)",
+  ];
+  const rows: CsvCell[][] = review.trials.map((t) => {
+    const unit = t.question.unit;
+    const [first, second] = [t.summary[1], t.summary[2]];
+    return [
+      t.position,
+      t.rigLabel,
+      t.question.prompt,
+      ...paramCells(t, params),
+      ...inUnitColumns(units, unit, sig(t.result?.value)),
+      ...inUnitColumns(units, unit, sig(t.result?.uncertainty)),
+      ...inUnitColumns(units, unit, sig(t.theory?.value)),
+      first.count,
+      ...inUnitColumns(units, unit, sig(first.median)),
+      ...inUnitColumns(units, unit, sig(first.spread)),
+      first.within10,
+      second.count,
+      ...inUnitColumns(units, unit, sig(second.median)),
+      second.within10,
+      t.explanations.length,
+      t.ranAt,
+    ];
+  });
+  return toCsv(header, rows);
+}
+
+/** "11X-Physics-2026-12-02-predictions.csv": ASCII letters, digits and dashes only, safe in any header. */
+export function exportFileName(review: LessonReview, kind: "predictions" | "results"): string {
+  const ascii = review.lesson.className
+    .normalize("NFKD")
+    // Accents come apart from their letters under NFKD: drop the marks, keep the letters.
+    .replace(/\p{M}/gu, "")
+    .replace(/[^A-Za-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, 60);
+  const date = review.lesson.startedAt.slice(0, 10);
+  return `${ascii || "class"}-${date}-${kind}.csv`;
+}
