@@ -20,6 +20,7 @@ import { AppError } from "./http/app-error";
 import { apiNotFound, errorMiddleware } from "./http/error-middleware";
 import { invitationsRoutes } from "./invitations/invitations.routes";
 import { createLessonLive } from "./lessons/lessons.handlers";
+import { lessonPlansRoutes } from "./lesson-plans/lesson-plans.routes";
 import { lessonsRoutes } from "./lessons/lessons.routes";
 import { plannedLessonsRoutes } from "./planned-lessons/planned-lessons.routes";
 import { sendLessonSummary } from "./lesson-mail/lesson-summary.service";
@@ -161,6 +162,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   app.use(classesRoutes(db));
   app.use(lessonsRoutes(db, lessonLive));
   app.use(plannedLessonsRoutes(db));
+  app.use(lessonPlansRoutes(db));
   app.use(benchRoutes(db, createPhotoStore(config.uploadsDir)));
   app.use(departmentRoutes(db));
   app.use(staffRoutes(db, realtime));

@@ -47,6 +47,34 @@ export const PHASE_NEXT: Record<TrialPhase, readonly TrialPhase[]> = {
 
 export const canMovePhase = (from: TrialPhase, to: TrialPhase) => PHASE_NEXT[from].includes(to);
 
+/** A question's say on the phases after the run (both default to on). */
+export interface PhaseFlags {
+  askExplanation?: boolean;
+  revote?: boolean;
+}
+
+/**
+ * `canMovePhase` for a trial whose question may skip steps: no "explain" when no explanation is
+ * asked, no "revote" when no re-vote is offered. Without "explain", the re-vote (if offered)
+ * opens straight after the run.
+ */
+export function canMoveTrialPhase(from: TrialPhase, to: TrialPhase, flags: PhaseFlags): boolean {
+  const explain = flags.askExplanation !== false;
+  const revote = flags.revote !== false;
+  if (to === "explain" && !explain) return false;
+  if (to === "revote" && !revote) return false;
+  if (from === "observe" && to === "revote") return !explain;
+  return canMovePhase(from, to);
+}
+
+/** The steps a trial with this question goes through, in order (the re-vote only when it is open). */
+export function phaseStepsFor(flags: PhaseFlags, current: TrialPhase): TrialPhase[] {
+  const steps: TrialPhase[] = ["setup", "predict", "observe"];
+  if (flags.askExplanation !== false) steps.push("explain");
+  if (current === "revote") steps.push("revote");
+  return steps;
+}
+
 /** Round 1 is the prediction before the run; round 2 the re-vote after discussion. */
 export const ROUNDS = [1, 2] as const;
 export type Round = (typeof ROUNDS)[number];

@@ -97,6 +97,11 @@ export const startLessonInputSchema = z.object({
   showNames: z.boolean().default(false),
   /** Start with the trials (rig, parameters, question, in order) of one of the teacher's earlier lessons. */
   fromLessonId: z.uuid({ error: "Pick one of your earlier lessons." }).nullable().default(null),
+  /** Start with the trials of a lesson plan the teacher can see (their own, or shared in their department). */
+  planId: z.uuid({ error: "Pick one of the plans." }).nullable().default(null),
+}).refine((v) => v.fromLessonId === null || v.planId === null, {
+  message: "Start from an earlier lesson or from a plan, not both.",
+  path: ["planId"],
 });
 export type StartLessonInput = z.input<typeof startLessonInputSchema>;
 

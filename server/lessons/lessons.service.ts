@@ -6,7 +6,7 @@ import { recordAudit } from "../audit/audit.repository";
 import { classForActor } from "../classes/classes.access";
 import { isUniqueViolation } from "../classes/classes.repository";
 import { DEFAULT_QUESTIONS, QUESTION_QUANTITIES, quantityOf } from "../contracts/lesson-questions";
-import { DISPLAY_UNITS, LESSON_LIMITS, ROUND_PHASE, canMovePhase, type Round, type TrialPhase } from "../contracts/lesson-rules";
+import { DISPLAY_UNITS, LESSON_LIMITS, ROUND_PHASE, canMoveTrialPhase, type Round, type TrialPhase } from "../contracts/lesson-rules";
 import type {
   LessonLookup,
   PupilSession,
@@ -26,6 +26,7 @@ import type { Db } from "../db/client";
 import { explanations, lessonParticipants, lessons, predictions, rosterEntries, trials } from "../db/schema";
 import { AppError, forbidden, notFound } from "../http/app-error";
 import type { Actor } from "../staff/staff.repository";
+import { planForStart } from "../lesson-plans/lesson-plans.access";
 import { newLessonCode } from "./lesson-code";
 import * as repo from "./lessons.repository";
 import { publicLesson, type ExplanationRow, type PredictionRow, type TrialRow } from "./lessons.views";
@@ -126,11 +127,13 @@ export function theoryFor(rig: RigId, params: Record<string, unknown>, seed: num
 
 type TrialSetup = { rig: string; params: Record<string, unknown>; question: Question };
 
-async function insertLessonOnce(db: Db, actor: Actor, classId: string, showNames: boolean, setups: TrialSetup[]) {
+type FromPlan = { planId: string; planTitle: string } | null;
+
+async function insertLessonOnce(db: Db, actor: Actor, classId: string, showNames: boolean, setups: TrialSetup[], plan: FromPlan) {
   return db.transaction(async (tx) => {
     const [lesson] = await tx
       .insert(lessons)
-      .values({ classId, teacherId: actor.id, code: newLessonCode(), showNames })
+      .values({ classId, teacherId: actor.id, code: newLessonCode(), showNames, planId: plan?.planId ?? null, planTitle: plan?.planTitle ?? null })
       .returning();
     const made = await tx
       .insert(trials)
@@ -155,14 +158,26 @@ async function startingSetups(db: Db, actor: Actor, fromLessonId: string | null)
   return earlier.map((t) => ({ rig: t.rig, params: t.params, question: t.question }));
 }
 
-export async function startLesson(db: Db, actor: Actor, classId: string, input: { showNames: boolean; fromLessonId: string | null }) {
+export async function startLesson(
+  db: Db,
+  actor: Actor,
+  classId: string,
+  input: { showNames: boolean; fromLessonId: string | null; planId: string | null },
+) {
   const row = await classForActor(db, actor, classId, "write");
   if (row.archivedAt) throw new AppError("bad_request", "This class is archived: restore it to start a lesson.");
-  const setups = await startingSetups(db, actor, input.fromLessonId);
+  let plan: FromPlan = null;
+  let setups: TrialSetup[];
+  if (input.planId) {
+    // The plan's set-ups, in its order; the title is kept on the lesson in case the plan goes.
+    const found = await planForStart(db, actor, input.planId);
+    plan = { planId: found.id, planTitle: found.title };
+    setups = found.trials.map((t) => ({ rig: t.rig, params: t.params, question: t.question }));
+  } else setups = await startingSetups(db, actor, input.fromLessonId);
   // A code already in use by an open lesson: draw another (64 million codes, so this is rare).
   for (let attempt = 1; ; attempt++) {
     try {
-      return await insertLessonOnce(db, actor, classId, input.showNames, setups);
+      return await insertLessonOnce(db, actor, classId, input.showNames, setups, plan);
     } catch (error) {
       if (!isUniqueViolation(error, "lessons_open_code_key") || attempt >= 10) throw error;
     }
@@ -277,8 +292,13 @@ export async function showTrial(db: Db, who: SocketWho, input: { lessonId: strin
 
 export async function movePhase(db: Db, who: SocketWho, input: z.output<typeof movePhaseInputSchema>) {
   const { trial } = await trialForTeacher(db, who, input.trialId);
-  if (!canMovePhase(trial.phase, input.phase)) {
-    throw new AppError("bad_request", `A trial cannot go from "${trial.phase}" to "${input.phase}".`);
+  if (!canMoveTrialPhase(trial.phase, input.phase, trial.question)) {
+    const skipped =
+      (input.phase === "explain" && trial.question.askExplanation === false) || (input.phase === "revote" && trial.question.revote === false);
+    throw new AppError(
+      "bad_request",
+      skipped ? `This trial's question leaves out "${input.phase}".` : `A trial cannot go from "${trial.phase}" to "${input.phase}".`,
+    );
   }
   // Only from the phase we checked: a concurrent move cannot be overwritten.
   const [updated] = await db

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, gte, isNull, or, sql } from "drizzle-orm";
+import { and, asc, desc, eq, gte, isNull, sql } from "drizzle-orm";
 import type { Db } from "../db/client";
 import { classes, lessonPlans, lessons, plannedLessons } from "../db/schema";
 
@@ -33,18 +33,6 @@ export function upcomingOfTeacher(db: Reader, teacherId: string, since: Date, li
 
 export async function findPlanned(db: Reader, id: string) {
   const [row] = await db.select().from(plannedLessons).where(eq(plannedLessons.id, id));
-  return row;
-}
-
-/** A plan the teacher may use: their own, or one shared in their department. */
-export async function findUsablePlan(db: Reader, planId: string, actor: { id: string; schoolId: string; departmentId: string | null }) {
-  const sharedHere = actor.departmentId
-    ? and(eq(lessonPlans.shared, true), eq(lessonPlans.departmentId, actor.departmentId))
-    : sql`false`;
-  const [row] = await db
-    .select({ id: lessonPlans.id, title: lessonPlans.title })
-    .from(lessonPlans)
-    .where(and(eq(lessonPlans.id, planId), eq(lessonPlans.schoolId, actor.schoolId), or(eq(lessonPlans.ownerId, actor.id), sharedHere)));
   return row;
 }
 

@@ -6,6 +6,7 @@ import { plannedLessons } from "../db/schema";
 import { classForActor } from "../classes/classes.access";
 import { AppError, notFound } from "../http/app-error";
 import type { Actor } from "../staff/staff.repository";
+import { planForStart } from "../lesson-plans/lesson-plans.access";
 import * as repo from "./planned-lessons.repository";
 
 /** A lesson planned for 9:00 still shows at 10:30, in case the class started late. */
@@ -23,8 +24,13 @@ export async function upcoming(db: Db, actor: Actor, now = new Date()): Promise<
 export async function planLesson(db: Db, actor: Actor, input: z.output<typeof planLessonInputSchema>): Promise<PlannedLessonItem> {
   const cls = await classForActor(db, actor, input.classId, "write");
   if (cls.archivedAt) throw new AppError("bad_request", "This class is archived: restore it to plan a lesson with it.");
-  const plan = input.planId ? await repo.findUsablePlan(db, input.planId, actor) : null;
-  if (input.planId && !plan) throw new AppError("validation_failed", "Some of the details need correcting.", { planId: ["That plan was not found among yours or your department's."] });
+  const plan = input.planId
+    ? await planForStart(db, actor, input.planId).catch(() => {
+        throw new AppError("validation_failed", "Some of the details need correcting.", {
+          planId: ["That plan was not found among yours or your department's."],
+        });
+      })
+    : null;
   const [row] = await db
     .insert(plannedLessons)
     .values({ classId: cls.id, teacherId: actor.id, planId: plan?.id ?? null, plannedFor: input.plannedFor })

@@ -1,5 +1,5 @@
 /**
- * Every class, bench-data, live-lesson, planned-lesson, department, staff, invitation, pupil-data and captured-mail route against every
+ * Every class, bench-data, live-lesson, lesson-plan, planned-lesson, department, staff, invitation, pupil-data and captured-mail route against every
  * kind of caller. Teacher A owns the
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
@@ -17,7 +17,7 @@ const CALLERS: Caller[] = ["anonymous", "teacherA", "teacherB", "head", "otherHe
 interface RouteCase {
   route: string;
   method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
-  path: (f: Fixture) => string;
+  path: (f: Fixture, caller: Caller) => string;
   body?: (caller: Caller, f: Fixture) => unknown;
   expected: Record<Caller, number>;
 }
@@ -50,6 +50,21 @@ const adminOnly = (status: number): Record<Caller, number> => ({
   otherHead: 403,
   elsewhere: 403,
   admin: status,
+});
+
+/** A plan shared in teacher A's department: readable there, unknown elsewhere. */
+const sharedPlan = (status: number): Record<Caller, number> => ({
+  anonymous: 401,
+  teacherA: status,
+  teacherB: status,
+  head: status,
+  otherHead: 404,
+  elsewhere: 404,
+  admin: 403,
+});
+const planBody = (title: string) => ({
+  title,
+  trials: [{ rig: "fountain", params: { potHeight: 1 }, question: { kind: "number", prompt: "How high?", quantity: "rise", unit: "cm" } }],
 });
 
 const ROUTES: RouteCase[] = [
@@ -137,6 +152,26 @@ const ROUTES: RouteCase[] = [
     body: (_c, f) => ({ classId: f.classA, plannedFor: new Date(Date.now() + 86_400_000).toISOString() }),
     expected: ownerOnly(201),
   },
+  { route: "GET /api/lesson-plans", method: "GET", path: () => "/api/lesson-plans", expected: anyTeacher(200) },
+  { route: "POST /api/lesson-plans", method: "POST", path: () => "/api/lesson-plans", body: (caller) => planBody(`Plan of ${caller}`), expected: anyTeacher(201) },
+  { route: "POST /api/lesson-plans/preview", method: "POST", path: () => "/api/lesson-plans/preview", body: () => planBody("x").trials[0], expected: anyTeacher(200) },
+  // Teacher A's plan, shared with the Science department: colleagues read and copy, only the owner changes.
+  { route: "GET /api/lesson-plans/:id", method: "GET", path: () => `/api/lesson-plans/${made.planId}`, expected: sharedPlan(200) },
+  {
+    route: "PUT /api/lesson-plans/:id",
+    method: "PUT",
+    path: () => `/api/lesson-plans/${made.planId}`,
+    body: () => ({ ...planBody("Changed"), shared: true }),
+    expected: { ...sharedPlan(403), teacherA: 200 },
+  },
+  { route: "POST /api/lesson-plans/:id/duplicate", method: "POST", path: () => `/api/lesson-plans/${made.planId}/duplicate`, expected: sharedPlan(201) },
+  {
+    route: "DELETE /api/lesson-plans/:id",
+    method: "DELETE",
+    // The owner deletes a plan of its own; everyone else tries the shared one, which stays.
+    path: (_f, caller) => `/api/lesson-plans/${caller === "teacherA" ? made.sparePlanId : made.planId}`,
+    expected: { ...sharedPlan(403), teacherA: 204 },
+  },
   {
     route: "GET /api/department/classes",
     method: "GET",
@@ -211,7 +246,7 @@ const ROUTES: RouteCase[] = [
 const ctx = useTestStack(seedFixture);
 const agents = new Map<Caller, HttpAgent>();
 /** What teacher A makes before the matrix runs: a typed run, an uploaded photo and a live lesson. */
-const made = { benchRunId: "", benchPhotoId: "", lessonId: "" };
+const made = { benchRunId: "", benchPhotoId: "", lessonId: "", planId: "", sparePlanId: "" };
 
 beforeAll(async () => {
   for (const caller of CALLERS) {
@@ -232,12 +267,14 @@ beforeAll(async () => {
   made.benchPhotoId = ((await photo.json()) as { id: string }).id;
   const lesson = await owner.json<{ lessonId: string }>(`/api/classes/${ctx.fixture.classA}/lessons`, { method: "POST", json: {} });
   made.lessonId = lesson.body.lessonId;
+  made.planId = (await owner.json<{ id: string }>("/api/lesson-plans", { method: "POST", json: { ...planBody("Shared plan"), shared: true } })).body.id;
+  made.sparePlanId = (await owner.json<{ id: string }>("/api/lesson-plans", { method: "POST", json: planBody("Spare plan") })).body.id;
 });
 
 describe.each(ROUTES)("$route", ({ method, path, body, expected }) => {
   it.each(CALLERS)("as %s", async (caller) => {
     const agent = agents.get(caller)!;
-    const res = await agent.request(path(ctx.fixture), { method, json: body?.(caller, ctx.fixture) });
+    const res = await agent.request(path(ctx.fixture, caller), { method, json: body?.(caller, ctx.fixture) });
     const status = res.status;
     const text = await res.text();
     // Photos answer with image bytes; everything else, and every refusal, is JSON.

@@ -2,7 +2,9 @@ import { describe, expect, it } from "vitest";
 import { createClassInputSchema } from "../../contracts/classes";
 import { rosterInputSchema } from "../../contracts/roster";
 import { isLessonCode } from "../../contracts/lesson-rules";
-import { DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_STAFF, DEMO_UNINVITED } from "./demo-data";
+import { lessonPlanInputSchema } from "../../contracts/lesson-plans";
+import { checkSetup } from "../../lessons/lessons.service";
+import { DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANS, DEMO_STAFF, DEMO_UNINVITED } from "./demo-data";
 
 describe("the demo school", () => {
   it("has a head of department, two teachers and an admin", () => {
@@ -34,5 +36,32 @@ describe("the demo school", () => {
       expect(trial.rise.value / trial.potHeight).toBeLessThan(0.16);
     }
     for (const e of DEMO_PAST_LESSON.explanations) expect(e.pupil).toBeLessThan(DEMO_PAST_LESSON.trials[0].answers.length);
+  });
+});
+
+describe("the demo's starter plans", () => {
+  it("are three plans whose set-ups pass the same checks a teacher's plan does", () => {
+    expect(DEMO_PLANS.plans).toHaveLength(3);
+    expect(DEMO_STAFF.some((s) => s.key === DEMO_PLANS.owner && s.inDepartment)).toBe(true);
+    for (const plan of DEMO_PLANS.plans) {
+      const parsed = lessonPlanInputSchema.safeParse({ ...plan, shared: true });
+      expect(parsed.error?.issues ?? []).toEqual([]);
+      // checkSetup throws with field errors for a parameter outside its range or a question the rig cannot answer.
+      for (const trial of parsed.data!.trials) expect(() => checkSetup(trial)).not.toThrow();
+    }
+  });
+
+  it("cover the fountain against drop height, rods against beads, and a chain onto a scale", () => {
+    const [heights, shapes, scale] = DEMO_PLANS.plans;
+    expect(heights.trials.map((t) => t.params.potHeight)).toEqual([0.5, 1, 1.5]);
+    expect(heights.trials.every((t) => t.question.kind === "number" && t.question.quantity === "rise" && t.question.unit === "cm")).toBe(true);
+    expect(shapes.trials.map((t) => t.params.linkShape)).toEqual(["rod", "bead-thread"]);
+    expect(new Set(shapes.trials.map((t) => t.params.potHeight)).size).toBe(1);
+    expect(shapes.trials.every((t) => t.question.kind === "choice")).toBe(true);
+    expect(scale.trials.every((t) => t.rig === "scale" && t.question.quantity === "readingRatio")).toBe(true);
+  });
+
+  it("mention the school's risk assessment where a real chain might be dropped", () => {
+    for (const plan of [DEMO_PLANS.plans[0], DEMO_PLANS.plans[2]]) expect(plan.summary).toMatch(/risk assessment/);
   });
 });

@@ -99,3 +99,76 @@ export const DEMO_PAST_LESSON = {
     { pupil: 6, text: "I was wrong, I thought it would not rise at all.", shown: false },
   ],
 } as const;
+
+/**
+ * Starter lesson plans, written for the demo and shared with its department by the head of
+ * department, so a teacher's plans page has something to start from or duplicate. Each trial is a
+ * set-up as the board stores it (rig, parameters, question); anything left out takes the rig's default.
+ */
+export const DEMO_PLANS = {
+  owner: "head" as DemoStaff["key"],
+  plans: [
+    {
+      title: "Does a higher pot make a higher fountain?",
+      summary:
+        "Three drops of the same rod chain. Pupils predict the rise each time, then look for the pattern: " +
+        "does doubling the drop double the rise? If you also show a real chain, follow your school's risk assessment.",
+      trials: [0.5, 1, 1.5].map((potHeight) => ({
+        rig: "fountain" as const,
+        params: { linkShape: "rod", potHeight },
+        question: {
+          kind: "number" as const,
+          prompt: `The pot is ${potHeight} m above the floor. How far above the rim will the chain rise?`,
+          quantity: "rise",
+          unit: "cm",
+          askReason: true,
+          askExplanation: potHeight === 1.5,
+          revote: false,
+        },
+      })),
+    },
+    {
+      title: "Rods or beads on a thread?",
+      summary:
+        "The same drop with two kinds of chain. Stiff rods are kicked upwards as they leave the pile; beads on a " +
+        "thread are not. Ask first, run both, then let pupils explain the difference.",
+      trials: (["rod", "bead-thread"] as const).map((linkShape) => ({
+        rig: "fountain" as const,
+        params: { linkShape, potHeight: 1 },
+        question: {
+          kind: "choice" as const,
+          prompt: linkShape === "rod" ? "Rod chain, 1 m drop: will it rise clearly above the rim?" : "Beads on a thread, 1 m drop: will it rise clearly above the rim?",
+          quantity: "rise",
+          unit: "cm",
+          choices: [
+            { label: "Yes, by more than 5 cm", min: 5, max: null },
+            { label: "A little, 1 to 5 cm", min: 1, max: 5 },
+            { label: "Hardly at all, under 1 cm", min: null, max: 1 },
+          ],
+          askReason: true,
+          askExplanation: true,
+          revote: linkShape === "bead-thread",
+        },
+      })),
+    },
+    {
+      title: "A chain falling onto a scale",
+      summary:
+        "A chain held just above a scale pan is let go. While it falls, does the scale show only the weight of the " +
+        "chain already on the pan, or more? A real falling chain is a hazard to feet and fingers: follow your school's risk assessment.",
+      trials: [1, 2].map((chainLength) => ({
+        rig: "scale" as const,
+        params: { linkShape: "rod", chainLength },
+        question: {
+          kind: "number" as const,
+          prompt: `A ${chainLength} m chain falls onto the pan. The scale reads how many times the weight of chain already on it?`,
+          quantity: "readingRatio",
+          unit: "",
+          askReason: true,
+          askExplanation: true,
+          revote: chainLength === 2,
+        },
+      })),
+    },
+  ],
+} as const;

@@ -1,9 +1,10 @@
 import { createHash, randomUUID } from "node:crypto";
 import { count, eq } from "drizzle-orm";
+import { trialSetupSchema } from "../../contracts/lessons";
 import type { Db } from "../client";
-import { benchRuns, classes, departments, explanations, lessonParticipants, lessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
-import { defaultParams, defaultQuestion, theoryFor } from "../../lessons/lessons.service";
-import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
+import { benchRuns, classes, departments, explanations, lessonParticipants, lessonPlans, lessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
+import { checkSetup, defaultParams, defaultQuestion, theoryFor } from "../../lessons/lessons.service";
+import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANS, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
 
 /**
  * Seeds the invented demo school on first run only: if any school exists, nothing happens.
@@ -65,6 +66,21 @@ export async function seedDemo(db: Db): Promise<boolean> {
         );
       }
     }
+    // Stored as the board stores a set-up: checked against the rig's schema, defaults filled in.
+    await tx.insert(lessonPlans).values(
+      DEMO_PLANS.plans.map((plan, i) => ({
+        schoolId: school!.id,
+        departmentId: department!.id,
+        ownerId: staffIds.get(DEMO_PLANS.owner)!,
+        title: plan.title,
+        summary: plan.summary,
+        shared: true,
+        trials: plan.trials.map((t) => checkSetup(trialSetupSchema.parse(t))),
+        // The first plan is the latest, so the list (newest first) shows them in this order.
+        updatedAt: new Date(Date.now() - (i + 1) * 60 * MINUTE),
+        createdAt: new Date(Date.now() - (i + 1) * 60 * MINUTE),
+      })),
+    );
     return true;
   });
 }
