@@ -33,6 +33,15 @@ function checkTrials(trials: z.output<typeof trialSetupSchema>[]): TrialSetup[] 
 }
 
 /**
+ * The fountain's theory does not depend on how many links the chain has (only on the drop, α, β,
+ * λ and the link's shape; checked in lesson-plans.service.test.ts), so plans work it out on the
+ * shortest chain the rig allows: building 1000 links costs 70–150 ms a trial, 100 links a few ms.
+ */
+export const THEORY_LINKS = 100;
+export const theoryParams = (setup: Pick<TrialSetup, "rig" | "params">) =>
+  setup.rig === "fountain" ? { ...setup.params, links: THEORY_LINKS } : setup.params;
+
+/**
  * The closed-form value for a set-up in the question's unit, as the board shows it (the theory
  * is worked out by the rig itself, the same as for a live trial; cached per set-up).
  */
@@ -42,7 +51,7 @@ export function theoryInQuestionUnit(setup: TrialSetup): ShownValue | null {
   if (!quantity || per === null) return null;
   let si: number | undefined;
   try {
-    si = theoryFor(setup.rig, setup.params, 1)[setup.question.quantity];
+    si = theoryFor(setup.rig, theoryParams(setup), 1)[setup.question.quantity];
   } catch {
     return null;
   }

@@ -316,9 +316,11 @@ function ResultPanel({ state, trial }: { state: PupilState; trial: PublicTrial }
 const PHASE_ORDER = ["predict", "observe", "explain"] as const;
 
 /** Where the trial is: plain words, the current step in bold and marked for screen readers. */
-function PhaseSteps({ phase }: { phase: PublicTrial["phase"] }) {
+function PhaseSteps({ phase, askExplanation }: { phase: PublicTrial["phase"]; askExplanation: boolean }) {
   const current = phase === "revote" ? "explain" : phase;
-  const steps: PublicTrial["phase"][] = [...PHASE_ORDER, ...(phase === "revote" ? (["revote"] as const) : [])];
+  // A question that asks for no explanation has no explain step.
+  const order = PHASE_ORDER.filter((p) => p !== "explain" || askExplanation);
+  const steps: PublicTrial["phase"][] = [...order, ...(phase === "revote" ? (["revote"] as const) : [])];
   return (
     <ol className="mt-2 flex flex-wrap items-center gap-x-1 text-ink-muted" aria-label="Steps of this trial">
       {steps.map((p, i) => {
@@ -349,7 +351,7 @@ export function TrialView({ client, state, trial, className }: { client: PupilCl
         </h1>
         {/* What the rig does is shown after the run: before it, it could answer the question. */}
         {beforeRun ? null : <p className="mt-1">{trial.rigSummary}</p>}
-        <PhaseSteps phase={trial.phase} />
+        <PhaseSteps phase={trial.phase} askExplanation={trial.question.askExplanation !== false} />
         <RigSketch rig={trial.rig} label={trial.rigLabel} beforeRun={beforeRun} className="mt-3" />
         {trial.shownParams.length > 0 ? (
           <dl className="mt-3 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 border-t border-line pt-3">

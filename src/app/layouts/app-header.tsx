@@ -18,6 +18,7 @@ interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: "/", label: "Home", roles: ["teacher", "head_of_department"], end: true },
   { to: "/classes", label: "Classes", roles: ["teacher", "head_of_department"] },
+  { to: "/plans", label: "Plans", roles: ["teacher", "head_of_department"] },
   { to: "/department", label: "Department", roles: ["head_of_department"] },
   { to: "/staff", label: "Staff", roles: ["admin"] },
   { to: "/pupil-data", label: "Pupil data", roles: ["admin"] },

@@ -17,6 +17,7 @@ import { useClass } from "@/features/classes/api/get-class";
 import { ArchiveClassSection } from "@/features/classes/components/archive-class-section";
 import { ClassDetailsSection } from "@/features/classes/components/class-details-section";
 import { RosterSection } from "@/features/classes/components/roster-section";
+import { usePlans } from "@/features/lesson-plans/api/get-plans";
 import { LiveLessonsSection } from "@/features/live-lessons/components/live-lessons-section";
 import { DeletePupilDataButton } from "@/features/pupil-data/components/delete-pupil-data-button";
 import { useDocumentTitle } from "@/hooks/use-document-title";
@@ -83,6 +84,8 @@ function ClassView({ item }: { item: ClassSummary }) {
   const [rosterDirty, setRosterDirty] = useState(false);
   const blocker = useUnsavedChanges(detailsDirty || rosterDirty);
   const readOnly = item.access === "department";
+  // Plans to start a lesson from (the section offers them only to the class's teacher).
+  const plans = usePlans();
 
   return (
     <>
@@ -116,7 +119,7 @@ function ClassView({ item }: { item: ClassSummary }) {
         </Notice>
       ) : null}
       <div className="grid gap-6">
-        <LiveLessonsSection item={item} />
+        <LiveLessonsSection item={item} plans={plans.data} />
         <ClassDetailsSection item={item} onDirtyChange={setDetailsDirty} />
         <RosterSection item={item} onDirtyChange={setRosterDirty} />
         {/* A failed chunk or a drawing error stays inside the section: the roster above still works. */}

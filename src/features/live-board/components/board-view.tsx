@@ -17,7 +17,7 @@ import { useSetupDraft } from "../hooks/use-setup-draft";
 import { setupKeyOf, useTrialSimulation } from "../hooks/use-trial-simulation";
 import { useTrialResult } from "../hooks/use-trial-result";
 import { nextPhaseOf, runNeedsPhaseChange } from "../utils/phases";
-import { setupPayload } from "../utils/setup-form";
+import { setupPayload } from "@/components/trial-setup/setup-form";
 import { seedForTrial } from "../utils/trial-result";
 import { ConnectionStatus } from "./connection-status";
 import { ExplanationList } from "./explanation-list";
@@ -96,7 +96,7 @@ export function BoardLayout({ lesson, send, status, graphPanel, tallyPanel, onBo
             {lesson.className}
             {trial ? <span className="font-normal text-ink-muted"> · Trial {trialNumber} of {lesson.trials.length}: {trial.rigLabel}</span> : null}
           </h1>
-          {trial ? <PhaseSteps phase={trial.phase} /> : null}
+          {trial ? <PhaseSteps phase={trial.phase} question={trial.question} /> : null}
           {status}
         </div>
         <JoinPanel code={lesson.code} joinUrl={lesson.joinUrl} joined={joinedCountOf(lesson)} />
@@ -183,7 +183,7 @@ function TrialBoard({ lesson, trial, send, panel, graphPanel, tallyPanel, onBoar
     if (!canPlay && action !== "next-phase" && action !== "run" && action !== "help") return;
     switch (action) {
       case "next-phase": {
-        const next = nextPhaseOf(trial.phase);
+        const next = nextPhaseOf(trial.phase, trial.question);
         if (next) void move(next);
         return;
       }

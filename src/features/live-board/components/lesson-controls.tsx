@@ -9,7 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
 import type { Send } from "../api/use-teacher-lesson";
-import { nextPhaseOf, runNeedsPhaseChange } from "../utils/phases";
+import { nextPhaseOf, revoteToggleOf, runNeedsPhaseChange } from "../utils/phases";
 
 /**
  * Lesson and trial commands for the board's side panel and the remote: phases, run, a new
@@ -44,7 +44,8 @@ export function LessonControls({ lessonId, trial, trials = [], showNames, send, 
     }
   };
   const move = (phase: TrialPhase) => trial && act(phase, () => send("trial:phase", { trialId: trial.id, phase }));
-  const next = trial ? nextPhaseOf(trial.phase) : null;
+  const next = trial ? nextPhaseOf(trial.phase, trial.question) : null;
+  const revote = trial ? revoteToggleOf(trial.phase, trial.question) : null;
   // Playing again is for the board; the remote can only start the run (the board plays it).
   const canRun = trial !== null && (runNeedsPhaseChange(trial.phase) || (onRun !== undefined && trial.phase !== "revote"));
 
@@ -71,9 +72,9 @@ export function LessonControls({ lessonId, trial, trials = [], showNames, send, 
             {runNeedsPhaseChange(trial.phase) ? "▶ Run (closes predictions)" : "▶ Play the run again"}
           </Button>
         ) : null}
-        {trial && (trial.phase === "explain" || trial.phase === "revote") ? (
-          <Button size={size} busy={busy === "toggle-revote"} onClick={() => void move(trial.phase === "explain" ? "revote" : "explain")}>
-            {trial.phase === "explain" ? "Open a re-vote" : "Close the re-vote"}
+        {revote ? (
+          <Button size={size} busy={busy === revote.to} onClick={() => void move(revote.to)}>
+            {revote.label}
           </Button>
         ) : null}
         <Button

@@ -1,11 +1,12 @@
-import { TRIAL_PHASE_LABELS, type TrialPhase } from "@contracts/lesson-rules";
+import { TRIAL_PHASE_LABELS, phaseStepsFor, type PhaseFlags, type TrialPhase } from "@contracts/lesson-rules";
 import { cx } from "@/lib/cx";
 
-const STEPS: TrialPhase[] = ["setup", "predict", "observe", "explain"];
-
-/** The trial's phases in order; the current one is filled, bold and marked "now" (not colour alone). */
-export function PhaseSteps({ phase, className, size = "board" }: { phase: TrialPhase; className?: string; size?: "board" | "remote" }) {
-  const steps = phase === "revote" ? [...STEPS, "revote" as const] : STEPS;
+/**
+ * The trial's phases in order (without those its question leaves out); the current one is
+ * filled, bold and marked "now" (not colour alone).
+ */
+export function PhaseSteps({ phase, question, className, size = "board" }: { phase: TrialPhase; question: PhaseFlags; className?: string; size?: "board" | "remote" }) {
+  const steps = phaseStepsFor(question, phase);
   const currentIndex = steps.indexOf(phase);
   return (
     <ol aria-label="Phases of this trial" className={cx("flex flex-wrap items-center gap-2", size === "board" ? "text-[max(1rem,2.6vh)]" : "text-base", className)}>

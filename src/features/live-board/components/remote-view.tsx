@@ -39,7 +39,7 @@ export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tally
           Code <span className="font-mono text-xl font-bold tracking-widest">{lesson.code}</span> · {joinedCountOf(lesson)} joined
         </p>
         <ConnectionStatus connection={connection} />
-        {trial ? <PhaseSteps phase={trial.phase} size="remote" /> : null}
+        {trial ? <PhaseSteps phase={trial.phase} question={trial.question} size="remote" /> : null}
       </header>
       {lesson.status === "ended" ? (
         <Notice tone="info">

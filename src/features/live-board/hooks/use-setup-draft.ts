@@ -2,7 +2,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import type { TeacherTrial } from "@contracts/lessons";
 import { isApiError } from "@/lib/api-client";
 import type { Send } from "../api/use-teacher-lesson";
-import { draftFromSetup, fieldMessages, setupPayload, type SetupDraft } from "../utils/setup-form";
+import { draftFromSetup, fieldMessages, setupPayload, type SetupDraft } from "@/components/trial-setup/setup-form";
 
 export interface SetupDraftHandle {
   draft: SetupDraft;

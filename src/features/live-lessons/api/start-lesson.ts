@@ -3,17 +3,23 @@ import type { StartedLesson, StartLessonInput } from "@contracts/lessons";
 import { apiRequest } from "@/lib/api-client";
 import { lessonListKeys } from "./lesson-keys";
 
-/** Starts a lesson with one fountain trial, or with the trials of an earlier lesson of the teacher's. */
-export const startLesson = (classId: string, fromLessonId: string | null = null) =>
+/** What a new lesson starts with: one fountain trial, an earlier lesson's trials, or a plan's. */
+export interface StartSource {
+  fromLessonId?: string | null;
+  planId?: string | null;
+}
+
+/** Starts a lesson with one fountain trial, or with the trials of an earlier lesson of the teacher's, or of a plan they can see. */
+export const startLesson = (classId: string, source: StartSource = {}) =>
   apiRequest<StartedLesson>(`/api/classes/${encodeURIComponent(classId)}/lessons`, {
     method: "POST",
-    body: { showNames: false, fromLessonId } satisfies StartLessonInput,
+    body: { showNames: false, fromLessonId: source.fromLessonId ?? null, planId: source.planId ?? null } satisfies StartLessonInput,
   });
 
 export function useStartLesson(classId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (fromLessonId: string | null = null) => startLesson(classId, fromLessonId),
+    mutationFn: (source: StartSource = {}) => startLesson(classId, source),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: lessonListKeys.all }),
   });
 }

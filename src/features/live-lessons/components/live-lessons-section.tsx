@@ -1,30 +1,38 @@
+import { useState } from "react";
 import { useNavigate } from "react-router";
 import type { ClassSummary } from "@contracts/classes";
 import type { LessonListItem } from "@contracts/lessons";
 import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { ErrorState } from "@/components/ui/error-state";
+import { SelectField } from "@/components/ui/field";
 import { ClockIcon } from "@/components/ui/icons";
 import { Notice } from "@/components/ui/notice";
 import { Section } from "@/components/ui/section";
 import { SkeletonList } from "@/components/ui/skeleton";
 import { useClassLessons } from "../api/get-class-lessons";
-import { useStartLesson } from "../api/start-lesson";
+import { useStartLesson, type StartSource } from "../api/start-lesson";
 import { formatLessonDate } from "../utils/format-lesson-date";
 
 /**
  * The class's live lessons: start one (straight onto the board), get back to an open one, and
  * the ended ones, newest first.
  */
-export function LiveLessonsSection({ item }: { item: ClassSummary }) {
+export function LiveLessonsSection({ item, plans = [] }: {
+  item: ClassSummary;
+  /** Lesson plans the teacher can start from (their own and their department's shared ones). */
+  plans?: readonly { id: string; title: string }[];
+}) {
   const lessons = useClassLessons(item.id);
   const start = useStartLesson(item.id);
   const navigate = useNavigate();
+  const [planId, setPlanId] = useState("");
   const owner = item.access === "owner";
   const canStart = owner && !item.archivedAt;
 
-  const onStart = (fromLessonId: string | null = null) =>
-    start.mutate(fromLessonId, { onSuccess: (started) => void navigate(`/lessons/${started.lessonId}/board`) });
+  const onStart = (source: StartSource = {}) =>
+    start.mutate(source, { onSuccess: (started) => void navigate(`/lessons/${started.lessonId}/board`) });
+  const plain = start.isPending && !start.variables?.fromLessonId && !start.variables?.planId;
 
   return (
     <Section
@@ -32,12 +40,33 @@ export function LiveLessonsSection({ item }: { item: ClassSummary }) {
       description="Start a live lesson to put its board on the projector. Pupils join with the lesson code shown there. An earlier lesson's trials can be run again with the class."
       actions={
         canStart ? (
-          <Button variant="primary" busy={start.isPending && start.variables == null} onClick={() => onStart()}>
+          <Button variant="primary" busy={plain} onClick={() => onStart()}>
             Start a live lesson
           </Button>
         ) : null
       }
     >
+      {canStart && plans.length > 0 ? (
+        <form
+          className="mb-4 flex flex-wrap items-end gap-3"
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (planId) onStart({ planId });
+          }}
+        >
+          <SelectField label="Or start from a plan" value={planId} onChange={(e) => setPlanId(e.target.value)} wrapperClassName="min-w-60 flex-1">
+            <option value="">Pick a plan…</option>
+            {plans.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.title}
+              </option>
+            ))}
+          </SelectField>
+          <Button type="submit" disabled={!planId} busy={start.isPending && Boolean(start.variables?.planId)}>
+            Start from this plan
+          </Button>
+        </form>
+      ) : null}
       {start.isError ? (
         <Notice tone="danger" className="mb-4" live="alert">
           <p>Could not start the lesson: {start.error.message}</p>
@@ -60,8 +89,8 @@ export function LiveLessonsSection({ item }: { item: ClassSummary }) {
               key={lesson.id}
               lesson={lesson}
               owner={owner}
-              runAgain={canStart && lesson.status === "ended" && lesson.trialCount > 0 ? () => onStart(lesson.id) : null}
-              starting={start.isPending && start.variables === lesson.id}
+              runAgain={canStart && lesson.status === "ended" && lesson.trialCount > 0 ? () => onStart({ fromLessonId: lesson.id }) : null}
+              starting={start.isPending && start.variables?.fromLessonId === lesson.id}
             />
           ))}
         </ul>
