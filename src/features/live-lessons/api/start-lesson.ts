@@ -28,11 +28,7 @@ export function useStartLesson(classId: string) {
 export function useStartClassLesson() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ classId, planId }: { classId: string; planId: string | null }) =>
-      apiRequest<StartedLesson>(`/api/classes/${encodeURIComponent(classId)}/lessons`, {
-        method: "POST",
-        body: { showNames: false, fromLessonId: null, planId } satisfies StartLessonInput,
-      }),
+    mutationFn: ({ classId, planId }: { classId: string; planId: string | null }) => startLesson(classId, { planId }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: lessonListKeys.all }),
   });
 }
