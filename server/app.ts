@@ -23,6 +23,7 @@ import { createLessonLive } from "./lessons/lessons.handlers";
 import { lessonPlansRoutes } from "./lesson-plans/lesson-plans.routes";
 import { lessonsRoutes } from "./lessons/lessons.routes";
 import { lessonReviewRoutes } from "./lesson-review/lesson-review.routes";
+import { plannedLessonsRoutes } from "./planned-lessons/planned-lessons.routes";
 import { sendLessonSummary } from "./lesson-mail/lesson-summary.service";
 import type { Mailer } from "./mail/mailer";
 import { createRealtime, type IoServer, type Realtime } from "./realtime/realtime";
@@ -161,6 +162,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   app.use(retentionRoutes(db, purgeSchedule));
   app.use(classesRoutes(db));
   app.use(lessonsRoutes(db, lessonLive));
+  app.use(plannedLessonsRoutes(db));
   app.use(lessonPlansRoutes(db));
   app.use(lessonReviewRoutes(db));
   app.use(benchRoutes(db, createPhotoStore(config.uploadsDir)));

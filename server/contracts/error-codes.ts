@@ -21,6 +21,7 @@ export const ERROR_CODES = [
   "lesson_ended",
   "phase_closed",
   "name_taken",
+  "already_started",
   "internal_error",
 ] as const;
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -20,6 +20,7 @@ const STATUS: Record<ErrorCode, number> = {
   lesson_ended: 409,
   phase_closed: 409,
   name_taken: 409,
+  already_started: 409,
   internal_error: 500,
 };
 

@@ -1,5 +1,5 @@
 /**
- * Every class, bench-data, live-lesson, lesson-plan, lesson-review, department, staff, invitation, pupil-data and captured-mail route against every
+ * Every class, bench-data, live-lesson, lesson-plan, lesson-review, planned-lesson, department, staff, invitation, pupil-data and captured-mail route against every
  * kind of caller. Teacher A owns the
  * class under test; teacher B and the head of department are in the same department; another
  * head leads a different department; a teacher at another school; the school admin.
@@ -143,6 +143,15 @@ const ROUTES: RouteCase[] = [
   { route: "GET /api/classes/:id/lessons", method: "GET", path: (f) => `/api/classes/${f.classA}/lessons`, expected: readable },
   { route: "GET /api/lessons/open", method: "GET", path: () => "/api/lessons/open", expected: anyTeacher(200) },
   { route: "POST /api/lessons/:id/end", method: "POST", path: () => `/api/lessons/${made.lessonId}/end`, expected: ownerOnly(200) },
+  { route: "GET /api/lessons/recent", method: "GET", path: () => "/api/lessons/recent", expected: anyTeacher(200) },
+  { route: "GET /api/planned-lessons", method: "GET", path: () => "/api/planned-lessons", expected: anyTeacher(200) },
+  {
+    route: "POST /api/planned-lessons",
+    method: "POST",
+    path: () => "/api/planned-lessons",
+    body: (_c, f) => ({ classId: f.classA, plannedFor: new Date(Date.now() + 86_400_000).toISOString() }),
+    expected: ownerOnly(201),
+  },
   { route: "GET /api/lesson-plans", method: "GET", path: () => "/api/lesson-plans", expected: anyTeacher(200) },
   { route: "POST /api/lesson-plans", method: "POST", path: () => "/api/lesson-plans", body: (caller) => planBody(`Plan of ${caller}`), expected: anyTeacher(201) },
   { route: "POST /api/lesson-plans/preview", method: "POST", path: () => "/api/lesson-plans/preview", body: () => planBody("x").trials[0], expected: anyTeacher(200) },

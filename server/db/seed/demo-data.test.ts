@@ -4,7 +4,7 @@ import { rosterInputSchema } from "../../contracts/roster";
 import { isLessonCode } from "../../contracts/lesson-rules";
 import { lessonPlanInputSchema } from "../../contracts/lesson-plans";
 import { checkSetup } from "../../lessons/lessons.service";
-import { DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANS, DEMO_STAFF, DEMO_UNINVITED } from "./demo-data";
+import { DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANNED_LESSONS, DEMO_PLANS, DEMO_STAFF, DEMO_UNINVITED } from "./demo-data";
 
 describe("the demo school", () => {
   it("has a head of department, two teachers and an admin", () => {
@@ -63,5 +63,18 @@ describe("the demo's starter plans", () => {
 
   it("mention the school's risk assessment where a real chain might be dropped", () => {
     for (const plan of [DEMO_PLANS.plans[0], DEMO_PLANS.plans[2]]) expect(plan.summary).toMatch(/risk assessment/);
+  });
+});
+
+describe("the demo's next lessons", () => {
+  it("belong to a class of the same teacher, use a starter plan, and fall at school times in the coming days", () => {
+    for (const p of DEMO_PLANNED_LESSONS) {
+      const cls = DEMO_CLASSES.find((c) => c.name === p.className);
+      expect(cls?.teacher).toBe(p.teacher);
+      expect(DEMO_PLANS.plans[p.planIndex]).toBeDefined();
+      expect(p.daysAhead).toBeGreaterThanOrEqual(1);
+      expect(p.hour * 60 + p.minute).toBeGreaterThanOrEqual(8 * 60);
+      expect(p.hour * 60 + p.minute).toBeLessThanOrEqual(16 * 60);
+    }
   });
 });

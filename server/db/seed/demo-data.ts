@@ -172,3 +172,12 @@ export const DEMO_PLANS = {
     },
   ],
 } as const;
+
+/**
+ * The demo teacher's next lessons, so home's "Next lessons" has something to start: days ahead of
+ * the day the demo is seeded, at a local school time, with one of the starter plans (by index).
+ */
+export const DEMO_PLANNED_LESSONS = [
+  { teacher: "teacherA", className: "10A Physics", planIndex: 0, daysAhead: 1, hour: 9, minute: 5 },
+  { teacher: "teacherA", className: "12 Physics, set 1", planIndex: 1, daysAhead: 2, hour: 13, minute: 40 },
+] as const satisfies readonly { teacher: DemoStaff["key"]; className: string; planIndex: number; daysAhead: number; hour: number; minute: number }[];

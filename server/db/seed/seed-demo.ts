@@ -2,9 +2,9 @@ import { createHash, randomUUID } from "node:crypto";
 import { count, eq } from "drizzle-orm";
 import { trialSetupSchema } from "../../contracts/lessons";
 import type { Db } from "../client";
-import { benchRuns, classes, departments, explanations, lessonParticipants, lessonPlans, lessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
+import { benchRuns, classes, departments, explanations, lessonParticipants, lessonPlans, lessons, plannedLessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
 import { checkSetup, defaultParams, defaultQuestion, theoryFor } from "../../lessons/lessons.service";
-import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANS, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
+import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANNED_LESSONS, DEMO_PLANS, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
 
 /**
  * Seeds the invented demo school on first run only: if any school exists, nothing happens.
@@ -36,6 +36,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
         .returning({ id: staff.id });
       staffIds.set(person.key, row!.id);
     }
+    const classIds = new Map<string, string>();
     for (const c of DEMO_CLASSES) {
       const [row] = await tx
         .insert(classes)
@@ -48,6 +49,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
           subject: c.subject,
         })
         .returning({ id: classes.id });
+      classIds.set(c.name, row!.id);
       await tx
         .insert(rosterEntries)
         .values(c.roster.map((displayName, position) => ({ classId: row!.id, displayName, position })));
@@ -67,7 +69,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
       }
     }
     // Stored as the board stores a set-up: checked against the rig's schema, defaults filled in.
-    await tx.insert(lessonPlans).values(
+    const plans = await tx.insert(lessonPlans).values(
       DEMO_PLANS.plans.map((plan, i) => ({
         schoolId: school!.id,
         departmentId: department!.id,
@@ -80,6 +82,14 @@ export async function seedDemo(db: Db): Promise<boolean> {
         updatedAt: new Date(Date.now() - (i + 1) * 60 * MINUTE),
         createdAt: new Date(Date.now() - (i + 1) * 60 * MINUTE),
       })),
+    ).returning({ id: lessonPlans.id });
+    await tx.insert(plannedLessons).values(
+      DEMO_PLANNED_LESSONS.map((p) => {
+        const at = new Date();
+        at.setDate(at.getDate() + p.daysAhead);
+        at.setHours(p.hour, p.minute, 0, 0);
+        return { classId: classIds.get(p.className)!, teacherId: staffIds.get(p.teacher)!, planId: plans[p.planIndex]!.id, plannedFor: at };
+      }),
     );
     return true;
   });

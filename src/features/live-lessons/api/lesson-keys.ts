@@ -3,4 +3,5 @@ export const lessonListKeys = {
   all: ["lesson-lists"] as const,
   forClass: (classId: string) => [...lessonListKeys.all, "class", classId] as const,
   open: () => [...lessonListKeys.all, "open"] as const,
+  recent: () => [...lessonListKeys.all, "recent"] as const,
 };

@@ -23,3 +23,12 @@ export function useStartLesson(classId: string) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: lessonListKeys.all }),
   });
 }
+
+/** Starts a lesson for any of the teacher's classes, empty or from a plan (home's quick start). */
+export function useStartClassLesson() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ classId, planId }: { classId: string; planId: string | null }) => startLesson(classId, { planId }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: lessonListKeys.all }),
+  });
+}
