@@ -57,8 +57,8 @@ describe("starting a lesson with an earlier lesson's trials", () => {
       [2, "hanging", "setup"],
     ]);
     expect(copy.trials[0]!.params.potHeight).toBe(1.5);
-    // The two flags the question left out are stored with their defaults (on).
-    expect(copy.trials[0]!.question).toEqual({ ...question, askExplanation: true, revote: true });
+    // The explanation and re-vote flags are copied as given (here: no explanation asked).
+    expect(copy.trials[0]!.question).toEqual(question);
     expect(copy.trials[1]!.params.span).toBe(1);
     expect(copy.trials.every((t) => t.predictions.length === 0 && t.result === null && t.seed === null)).toBe(true);
     expect(copy.currentTrialId).toBe(copy.trials[0]!.id);
