@@ -2,11 +2,14 @@
  * Lesson plans in the browser against the real server and Postgres (the demo school): a teacher
  * sees the department's starter plans, builds a two-trial plan in the editor (the sketch and the
  * theory value follow the parameters), saves it, starts a live lesson from it for a class, and
- * the board opens on trial 1 of 2 with the plan's set-up. A colleague's shared plan opens
+ * the board opens on trial 1 of 2 with the plan's set-up; a pupil answers, the lesson ends, and
+ * the teacher opens its review from the class page and downloads the predictions. A colleague's shared plan opens
  * read-only with "Duplicate to edit". Screenshots are kept as test output.
  */
+import { readFile } from "node:fs/promises";
 import { join } from "node:path";
 import { eq } from "drizzle-orm";
+import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { lessons, trials } from "../../server/db/schema";
 import { keepScreenshot, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
@@ -16,7 +19,7 @@ const ctx = useDemoInBrowser();
 const POT_HEIGHT = "Height of the pot above the floor (m)";
 
 describe("lesson plans", () => {
-  it("a teacher builds a two-trial plan, saves it and starts a live lesson from it", async () => {
+  it("a teacher builds a two-trial plan, starts a live lesson from it, then reviews it and downloads the CSV", async () => {
     const { page, problems } = await watchedPage(ctx.browser, ctx.stack.url, { width: 1400, height: 1000 });
     await signInAs(page, ctx.stack.url, "Tom Ashdown");
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Plans" }).click();
@@ -115,6 +118,41 @@ describe("lesson plans", () => {
       [1.5, "rod", true],
       [1, "bead-thread", false],
     ]);
+
+    // A pupil answers trial 1; the lesson ends; the teacher reviews it and downloads its predictions.
+    const pupil = await watchedPage(ctx.browser, ctx.stack.url, { width: 390, height: 844 });
+    await pupil.page.goto(`${ctx.stack.url}/join/${lesson!.code.toLowerCase()}`);
+    const pick = pupil.page.getByRole("group", { name: "Pick your name" }).getByRole("button").first();
+    const pupilName = (await pick.innerText()).trim();
+    await pick.click();
+    await pupil.page.getByRole("heading", { name: "Fountain rig" }).waitFor();
+    await page.getByText("1 joined").waitFor();
+    await page.locator("body").press("n");
+    await pupil.page.getByLabel("Your answer (cm)").fill("21,5");
+    await pupil.page.getByLabel(/Why do you think so/).fill("=1+1 twice the drop, twice the rise");
+    await pupil.page.getByRole("button", { name: "Send my prediction" }).click();
+    await pupil.page.getByText("Answer received").waitFor();
+    await page.getByText("1 answered").waitFor();
+    await page.getByRole("button", { name: "End lesson" }).click();
+    await page.getByRole("dialog", { name: "End this lesson?" }).getByRole("button", { name: "End lesson" }).click();
+    await page.getByRole("dialog", { name: "End this lesson?" }).waitFor({ state: "hidden" });
+
+    await page.goto(`${ctx.stack.url}/classes`);
+    await page.getByRole("link", { name: /10A Physics/ }).first().click();
+    const lessonsTable = page.getByTestId("class-lessons");
+    await lessonsTable.getByText("Two drops, two chains").waitFor();
+    await lessonsTable.getByRole("link", { name: /^Review the lesson of/ }).first().click();
+    await page.waitForURL(`${ctx.stack.url}/lessons/${lessonId}/review`);
+    await page.getByText(pupilName).first().waitFor();
+    await keepScreenshot(page, "e2e", "58-review-of-plan-lesson");
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Download predictions (CSV)" }).click()]);
+    const csv = Papa.parse<Record<string, string>>(await readFile((await download.path())!, "utf8"), { header: true, skipEmptyLines: true });
+    expect(csv.errors).toEqual([]);
+    expect(csv.data.map((r) => [r.trial, r.pupil, r.round, r["prediction (cm)"], r.reason])).toEqual([
+      ["1", pupilName, "before the run", "21.5", "'=1+1 twice the drop, twice the rise"],
+    ]);
+    expect(pupil.problems).toEqual([]);
+    await pupil.context.close();
     expect(problems).toEqual([]);
   });
 });
