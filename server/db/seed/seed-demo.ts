@@ -3,6 +3,7 @@ import { count, eq } from "drizzle-orm";
 import type { Db } from "../client";
 import { benchRuns, classes, departments, explanations, lessonParticipants, lessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
 import { defaultParams, defaultQuestion, theoryFor } from "../../lessons/lessons.service";
+import { refreshTrialSummaries } from "../../department/trial-summary";
 import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
 
 /**
@@ -138,6 +139,7 @@ async function seedPastLesson(tx: Tx, classId: string, teacherId: string, roster
       );
       await tx.insert(predictions).values(rows);
     }
+    await refreshTrialSummaries(tx, [trial!.id]);
     if (t === 0) {
       await tx.insert(explanations).values(
         plan.explanations.map((e) => ({
