@@ -257,6 +257,12 @@ export const lessons = pgTable(
     /** The plan the lesson started from, and its title then (shown even if the plan is later deleted). */
     planId: uuid("plan_id").references(() => lessonPlans.id, { onDelete: "set null" }),
     planTitle: text("plan_title"),
+    /**
+     * How many pupils took part, counted when the lesson ends (pupils cannot join an ended
+     * lesson), so the department overview need not count them again; null while open. A count,
+     * not pupil data: it stays when the retention purge removes the names.
+     */
+    participantCount: integer("participant_count"),
     startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
     endedAt: timestamp("ended_at", { withTimezone: true }),
   },

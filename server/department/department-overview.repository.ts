@@ -5,7 +5,7 @@ type Reader = Pick<Db, "execute">;
 
 /** The department's lessons started in [start, end): the week each falls in (Monday, UTC), teacher and class. */
 const lessonsInRange = (departmentId: string, start: Date, end: Date): SQL => sql`
-  select l.id, l.teacher_id, l.class_id, date_trunc('week', l.started_at at time zone 'UTC')::date as week
+  select l.id, l.teacher_id, l.class_id, l.participant_count, date_trunc('week', l.started_at at time zone 'UTC')::date as week
   from lessons l
   join classes c on c.id = l.class_id
   where c.department_id = ${departmentId} and l.started_at >= ${start.toISOString()} and l.started_at < ${end.toISOString()}`;
@@ -31,8 +31,12 @@ export async function lessonCells(db: Reader, departmentId: string, start: Date,
     from l
     join staff s on s.id = l.teacher_id
     join classes c on c.id = l.class_id
-    left join lateral (select count(*) filter (where t.ran_at is not null) as runs from trials t where t.lesson_id = l.id) tr on true
-    left join lateral (select count(*) as n from lesson_participants p where p.lesson_id = l.id) pp on true
+    left join (select t.lesson_id, count(*) as runs from trials t where t.ran_at is not null and t.lesson_id in (select id from l) group by 1) tr
+      on tr.lesson_id = l.id
+    -- Ended lessons carry their count; only lessons still open are counted here.
+    left join lateral (
+      select coalesce(l.participant_count, (select count(*) from lesson_participants p where p.lesson_id = l.id)) as n
+    ) pp on true
     group by 1, 2, 3, 4, 5
     order by 1, 3, 5`);
   return result.rows as unknown as LessonCellRow[];

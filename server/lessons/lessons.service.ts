@@ -1,5 +1,5 @@
 import { createHash, randomBytes } from "node:crypto";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import type { z } from "zod";
 import { ParamError, RIGS, parseParams, type RigId } from "../../sim";
 import { recordAudit } from "../audit/audit.repository";
@@ -185,7 +185,8 @@ export async function openLessons(db: Db, actor: Actor) {
 async function markEnded(db: Db, lessonId: string): Promise<boolean> {
   const ended = await db
     .update(lessons)
-    .set({ status: "ended", endedAt: new Date() })
+    // Pupils cannot join an ended lesson: count them once, for the department overview.
+    .set({ status: "ended", endedAt: new Date(), participantCount: sql`(select count(*) from ${lessonParticipants} where ${lessonParticipants.lessonId} = ${lessonId})` })
     .where(and(eq(lessons.id, lessonId), eq(lessons.status, "open")))
     .returning({ id: lessons.id });
   return ended.length > 0;

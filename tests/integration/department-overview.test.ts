@@ -14,7 +14,7 @@ import type { Question } from "../../server/contracts/lessons";
 import type { Db } from "../../server/db/client";
 import { classes, lessonParticipants, lessons, predictions, trials } from "../../server/db/schema";
 import { OVERVIEW_CSV_HEADER } from "../../server/department/department-overview.service";
-import { defaultParams, recordResult } from "../../server/lessons/lessons.service";
+import { defaultParams, endLesson, recordResult } from "../../server/lessons/lessons.service";
 import { projectPath } from "../../server/paths";
 import { PEOPLE, seedFixture, type Fixture } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
@@ -316,7 +316,7 @@ describe("per-trial summaries", () => {
     expect(written.filter((t) => t.n !== null)).toHaveLength(5); // the choice trial has no summary
     // As before migration 0006: no summaries anywhere. Then the migration's own UPDATE.
     await db.update(trials).set({ summaryPredictions: null, summaryWithin10: null, summaryMedianRelError: null });
-    const migration = readFileSync(projectPath("drizzle", "0006_trial_summaries.sql"), "utf8");
+    const migration = readFileSync(projectPath("drizzle", "0006_department_overview.sql"), "utf8");
     const backfill = migration.split("--> statement-breakpoint").find((s) => s.includes('UPDATE "trials"'));
     expect(backfill).toBeDefined();
     await ctx.database.pool.query(backfill!);
@@ -343,5 +343,19 @@ describe("per-trial summaries", () => {
     // Week of 2 Nov now: 2 of 5 within; median over trials (0.275 + 0.22025) / 2 = 0.247625.
     expect(body.closeness[0]!.shareWithin10).toBeCloseTo(0.4, 12);
     expect(body.closeness[0]!.medianRelativeError).toBeCloseTo(0.247625, 12);
+  });
+
+  it("a lesson ended by its teacher keeps its count of pupils, even once their names are purged", async () => {
+    const db = ctx.database.db;
+    const lessonId = made.lessonIds.maths!;
+    await db.update(lessons).set({ status: "open" }).where(eq(lessons.id, lessonId));
+    await endLesson(db, { staffId: ctx.fixture.staffIds.otherHead, participant: null }, lessonId);
+    const [ended] = await db.select().from(lessons).where(eq(lessons.id, lessonId));
+    expect(ended!.participantCount).toBe(4);
+    // What the retention purge does to a lesson's pupils: the names (and their answers) go.
+    await db.delete(lessonParticipants).where(eq(lessonParticipants.lessonId, lessonId));
+    const { body } = await agents.otherHead.json<DepartmentOverview>(`/api/department/overview?${RANGE}`);
+    expect(body.totals.pupilsTakingPart).toBe(4);
+    expect(body.closeness[1]).toMatchObject({ trialsCompared: 1, predictions: 1, shareWithin10: 1 });
   });
 });

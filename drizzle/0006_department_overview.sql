@@ -1,6 +1,10 @@
+ALTER TABLE "lessons" ADD COLUMN "participant_count" integer;--> statement-breakpoint
 ALTER TABLE "trials" ADD COLUMN "summary_predictions" integer;--> statement-breakpoint
 ALTER TABLE "trials" ADD COLUMN "summary_within10" integer;--> statement-breakpoint
 ALTER TABLE "trials" ADD COLUMN "summary_median_rel_error" double precision;--> statement-breakpoint
+-- Ended lessons before this migration: count their pupils now (server/lessons/lessons.service.ts markEnded does it from now on).
+UPDATE "lessons" SET "participant_count" = (SELECT count(*) FROM "lesson_participants" AS p WHERE p."lesson_id" = "lessons"."id") WHERE "status" = 'ended';
+--> statement-breakpoint
 -- Back-fill for trials recorded before this migration; the same rule as server/department/trial-summary.ts
 -- (tests/integration/department-overview.test.ts runs this statement and compares). Predictions are in the
 -- question's unit, results SI: DISPLAY_UNITS in server/contracts/lesson-rules.ts gives the factors.
