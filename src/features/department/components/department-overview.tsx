@@ -100,7 +100,9 @@ function OverviewBody({ overview, updating }: { overview: Overview; updating: bo
       </EmptyState>
     );
   }
-  const series = groupBy === "teacher" ? overview.lessonsByTeacher : overview.lessonsByClass;
+  // Two teachers may both have a "10A Physics": a class is named with its teacher.
+  const series =
+    groupBy === "teacher" ? overview.lessonsByTeacher : overview.lessonsByClass.map((c) => ({ ...c, name: `${c.name} (${c.teacherName})` }));
   const compared = overview.closeness.filter((c) => c.trialsCompared > 0);
   return (
     <div className="grid min-w-0 gap-8" aria-busy={updating || undefined} data-testid="overview-body">
