@@ -39,7 +39,7 @@ export function OverviewRangeForm({ range, today, onChange, errors }: {
           </Button>
         ))}
       </div>
-      <div className="flex flex-wrap items-end gap-4">
+      <div className="flex flex-wrap items-start gap-4">
         <TextField
           label="From"
           type="date"
@@ -59,7 +59,8 @@ export function OverviewRangeForm({ range, today, onChange, errors }: {
           onChange={(e) => setDraft({ ...draft, to: e.target.value })}
           wrapperClassName="w-44"
         />
-        <Button type="submit" variant="secondary">
+        {/* Level with the inputs (below their labels), whether or not a message shows under them. */}
+        <Button type="submit" variant="secondary" className="mt-[1.875rem]">
           Show
         </Button>
       </div>
