@@ -10,6 +10,7 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { readFileSync, rmSync } from "node:fs";
 import { createServer } from "node:net";
+import { cpus, loadavg } from "node:os";
 import { join } from "node:path";
 import { parseArgs } from "node:util";
 import { connectDatabase } from "../../server/db/client";
@@ -80,6 +81,9 @@ const fmt = (ms: number) => `${ms.toFixed(1)} ms`;
 
 async function main() {
   console.log(`bench:overview — ${RUNS} timed runs per case after ${WARM_UP} warm-up runs, ${new Date().toISOString()}`);
+  // Other work on the machine shows in the figures: say how busy it was.
+  const load = () => `load average ${loadavg().map((l) => l.toFixed(2)).join(" / ")} on ${cpus().length} cores`;
+  console.log(`  ${load()}`);
   // A cluster left running by an interrupted run would outlive its deleted folder.
   await stopCluster(join(DATA_DIR, "postgres"));
   rmSync(DATA_DIR, { recursive: true, force: true });
@@ -144,6 +148,7 @@ async function main() {
     }
     const widths = rows[0]!.map((_, c) => Math.max(...rows.map((r) => r[c]!.length)));
     for (const row of rows) console.log(row.map((cell, c) => cell.padEnd(widths[c]!)).join("  "));
+    console.log(`  ${load()}`);
   } finally {
     await database.close();
     await stopServer(child);
