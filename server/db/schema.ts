@@ -257,6 +257,12 @@ export const lessons = pgTable(
     /** The plan the lesson started from, and its title then (shown even if the plan is later deleted). */
     planId: uuid("plan_id").references(() => lessonPlans.id, { onDelete: "set null" }),
     planTitle: text("plan_title"),
+    /**
+     * How many pupils took part, counted when the lesson ends (pupils cannot join an ended
+     * lesson), so the department overview need not count them again; null while open. A count,
+     * not pupil data: it stays when the retention purge removes the names.
+     */
+    participantCount: integer("participant_count"),
     startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
     endedAt: timestamp("ended_at", { withTimezone: true }),
   },
@@ -312,6 +318,17 @@ export const trials = pgTable(
     tallyFirst: jsonb("tally_first").$type<Tally>(),
     tallySecond: jsonb("tally_second").$type<Tally>(),
     ranAt: timestamp("ran_at", { withTimezone: true }),
+    /**
+     * How close the class's round-1 number predictions were to the recorded result, kept with the
+     * trial so the department overview need not read every prediction (server/department/
+     * trial-summary.ts writes them whenever a result is recorded). Null until a number question
+     * has a result. Counts only: no pupil's answer can be read back from them.
+     */
+    summaryPredictions: integer("summary_predictions"),
+    /** Of those, how many were within 10 % of the result. */
+    summaryWithin10: integer("summary_within10"),
+    /** Median over the class of |prediction − result| / |result|; null when the result is 0 or nobody answered. */
+    summaryMedianRelError: doublePrecision("summary_median_rel_error"),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("trials_lesson_position_key").on(t.lessonId, t.position)],

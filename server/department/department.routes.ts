@@ -5,6 +5,13 @@ import { actorOf, requireRole } from "../auth/guards";
 import { forbidden } from "../http/app-error";
 import { parseInput } from "../http/validate";
 import { listDepartmentClasses } from "../classes/classes.repository";
+import { overviewQuerySchema } from "../contracts/department-overview";
+import { departmentOverview, departmentOverviewCsv, resolveRange } from "./department-overview.service";
+
+function departmentOf(actor: { departmentId: string | null }): string {
+  if (!actor.departmentId) throw forbidden("You are not attached to a department: ask your school admin.");
+  return actor.departmentId;
+}
 
 /** The head of department's read-only view of the department. */
 export function departmentRoutes(db: Db) {
@@ -13,9 +20,27 @@ export function departmentRoutes(db: Db) {
 
   router.get("/api/department/classes", async (req, res) => {
     const actor = actorOf(req);
-    if (!actor.departmentId) throw forbidden("You are not attached to a department: ask your school admin.");
+    const departmentId = departmentOf(actor);
     const { archived } = parseInput(classListQuerySchema, req.query);
-    res.json(await listDepartmentClasses(db, actor.departmentId, actor.id, archived));
+    res.json(await listDepartmentClasses(db, departmentId, actor.id, archived));
+  });
+
+  /** The range asked for with defaults filled in, checked again so a lone `from` cannot reach past the limit. */
+  const overviewRange = (query: unknown) => parseInput(overviewQuerySchema, resolveRange(parseInput(overviewQuerySchema, query)));
+
+  router.get("/api/department/overview", async (req, res) => {
+    const departmentId = departmentOf(actorOf(req));
+    res.json(await departmentOverview(db, departmentId, overviewRange(req.query)));
+  });
+
+  router.get("/api/department/overview.csv", async (req, res) => {
+    const departmentId = departmentOf(actorOf(req));
+    const { from, to, csv } = await departmentOverviewCsv(db, departmentId, overviewRange(req.query));
+    res
+      .type("text/csv; charset=utf-8")
+      .attachment(`department-overview-${from}-to-${to}.csv`)
+      .set("Cache-Control", "no-store")
+      .send(csv);
   });
 
   return router;

@@ -1,5 +1,5 @@
 import { createHash, randomBytes } from "node:crypto";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import type { z } from "zod";
 import { ParamError, RIGS, parseParams, type RigId } from "../../sim";
 import { recordAudit } from "../audit/audit.repository";
@@ -24,6 +24,7 @@ import type {
 import type { FieldErrors } from "../contracts/errors";
 import type { Db } from "../db/client";
 import { explanations, lessonParticipants, lessons, predictions, rosterEntries, trials } from "../db/schema";
+import { refreshTrialSummaries } from "../department/trial-summary";
 import { AppError, forbidden, notFound } from "../http/app-error";
 import type { Actor } from "../staff/staff.repository";
 import { planForStart } from "../lesson-plans/lesson-plans.access";
@@ -199,7 +200,8 @@ export async function openLessons(db: Db, actor: Actor) {
 async function markEnded(db: Db, lessonId: string): Promise<boolean> {
   const ended = await db
     .update(lessons)
-    .set({ status: "ended", endedAt: new Date() })
+    // Pupils cannot join an ended lesson: count them once, for the department overview.
+    .set({ status: "ended", endedAt: new Date(), participantCount: sql`(select count(*) from ${lessonParticipants} where ${lessonParticipants.lessonId} = ${lessonId})` })
     .where(and(eq(lessons.id, lessonId), eq(lessons.status, "open")))
     .returning({ id: lessons.id });
   return ended.length > 0;
@@ -316,10 +318,14 @@ export async function recordResult(db: Db, who: SocketWho, input: z.output<typeo
   const { trial } = await trialForTeacher(db, who, input.trialId);
   if (!RESULT_PHASES.includes(trial.phase)) throw new AppError("bad_request", "Record a run once the trial is in observe.");
   const theory = theoryFor(trial.rig as RigId, trial.params, input.seed);
-  await db
-    .update(trials)
-    .set({ seed: input.seed, measured: input.measured, run: input.run, theory, ranAt: new Date() })
-    .where(eq(trials.id, trial.id));
+  // The department overview reads the class's closeness from the trial: keep it in step with the result.
+  await db.transaction(async (tx) => {
+    await tx
+      .update(trials)
+      .set({ seed: input.seed, measured: input.measured, run: input.run, theory, ranAt: new Date() })
+      .where(eq(trials.id, trial.id));
+    await refreshTrialSummaries(tx, [trial.id]);
+  });
   return { trialId: trial.id, lessonId: trial.lessonId };
 }
 

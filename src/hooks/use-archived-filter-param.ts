@@ -8,7 +8,16 @@ export function useArchivedFilterParam(): [ArchivedFilter, (next: ArchivedFilter
   const filter = archivedFilterFromParam(params.get("show"));
   const setFilter = (next: ArchivedFilter) => {
     const param = paramFromArchivedFilter(next);
-    setParams(param ? { show: param } : {}, { replace: true });
+    // Other filters on the page (the department overview's dates) stay as they are.
+    setParams(
+      (current) => {
+        const updated = new URLSearchParams(current);
+        if (param) updated.set("show", param);
+        else updated.delete("show");
+        return updated;
+      },
+      { replace: true },
+    );
   };
   return [filter, setFilter];
 }

@@ -188,6 +188,18 @@ const ROUTES: RouteCase[] = [
     expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 200, otherHead: 200, elsewhere: 403, admin: 403 },
   },
   {
+    route: "GET /api/department/overview",
+    method: "GET",
+    path: () => "/api/department/overview",
+    expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 200, otherHead: 200, elsewhere: 403, admin: 403 },
+  },
+  {
+    route: "GET /api/department/overview.csv",
+    method: "GET",
+    path: () => "/api/department/overview.csv",
+    expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 200, otherHead: 200, elsewhere: 403, admin: 403 },
+  },
+  {
     route: "GET /api/staff",
     method: "GET",
     path: () => "/api/staff",

@@ -4,6 +4,7 @@ import { trialSetupSchema } from "../../contracts/lessons";
 import type { Db } from "../client";
 import { benchRuns, classes, departments, explanations, lessonParticipants, lessonPlans, lessons, plannedLessons, predictions, rosterEntries, schools, staff, trials } from "../schema";
 import { checkSetup, defaultParams, defaultQuestion, theoryFor } from "../../lessons/lessons.service";
+import { refreshTrialSummaries } from "../../department/trial-summary";
 import { DEMO_BENCH_RUNS, DEMO_CLASSES, DEMO_PAST_LESSON, DEMO_PLANNED_LESSONS, DEMO_PLANS, DEMO_SCHOOL, DEMO_STAFF } from "./demo-data";
 
 /**
@@ -164,6 +165,7 @@ async function seedPastLesson(tx: Tx, classId: string, teacherId: string, roster
       );
       await tx.insert(predictions).values(rows);
     }
+    await refreshTrialSummaries(tx, [trial!.id]);
     if (t === 0) {
       await tx.insert(explanations).values(
         plan.explanations.map((e) => ({

@@ -2,6 +2,7 @@ import { ArchivedFilterBar } from "@/components/ui/archived-filter-bar";
 import { Notice } from "@/components/ui/notice";
 import { PageHeader } from "@/components/ui/page-header";
 import { DepartmentClasses } from "@/features/department/components/department-classes";
+import { DepartmentOverview } from "@/features/department/components/department-overview";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { useArchivedFilterParam } from "@/hooks/use-archived-filter-param";
 import { RequireRole } from "../layouts/require-role";
@@ -25,10 +26,12 @@ function DepartmentPage() {
       <PageHeader
         eyebrow={me.school.name}
         title={me.department ? `${me.department.name} department` : "Department"}
-        description="Every class in the department, grouped by teacher. You can open each class and its roster to look; only its own teacher can change it."
+        description="How the department uses live lessons, and every class grouped by teacher. You can open each class and its roster to look; only its own teacher can change it."
       />
       {me.department ? (
         <>
+          <DepartmentOverview />
+          <h2 className="mt-4 text-2xl font-bold">Classes</h2>
           <ArchivedFilterBar value={filter} onChange={setFilter} />
           <DepartmentClasses archived={filter} viewerId={me.id} />
         </>

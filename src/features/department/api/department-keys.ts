@@ -5,4 +5,6 @@ export const departmentKeys = {
   all: ["department"] as const,
   classLists: () => [...departmentKeys.all, "classes"] as const,
   classList: (filters: { archived: ArchivedFilter }) => [...departmentKeys.classLists(), filters] as const,
+  overviews: () => [...departmentKeys.all, "overview"] as const,
+  overview: (range: { from: string; to: string }) => [...departmentKeys.overviews(), range] as const,
 };

@@ -1,0 +1,147 @@
+import Papa from "papaparse";
+import {
+  OVERVIEW_TIME_ZONE,
+  addDays,
+  defaultOverviewRange,
+  isoDay,
+  parseIsoDay,
+  weeksOverlapping,
+  type DepartmentOverview,
+  type WeeklyCloseness,
+  type WeeklySeries,
+  overviewQuerySchema,
+} from "../contracts/department-overview";
+import type { z } from "zod";
+import type { Db } from "../db/client";
+import { closenessRows, lessonCells, trialsByRig, type ClosenessRow, type LessonCellRow } from "./department-overview.repository";
+
+type Query = z.output<typeof overviewQuerySchema>;
+
+/** The range asked for, with the defaults filled in: a missing end is today, a missing start 12 weeks back. */
+export function resolveRange(query: Query, now: Date = new Date()): { from: string; to: string } {
+  const today = isoDay(now);
+  const to = query.to ?? (query.from && query.from > today ? query.from : today);
+  const from = query.from ?? defaultOverviewRange(to).from;
+  return { from, to };
+}
+
+interface Loaded {
+  from: string;
+  to: string;
+  weeks: string[];
+  cells: LessonCellRow[];
+  closeness: ClosenessRow[];
+  rigs: { rig: string; trialsRun: number }[];
+}
+
+async function load(db: Db, departmentId: string, query: Query, now?: Date): Promise<Loaded> {
+  const { from, to } = resolveRange(query, now);
+  const start = parseIsoDay(from)!;
+  const end = parseIsoDay(addDays(to, 1))!;
+  // Three small aggregate queries side by side on the pool.
+  const [cells, closeness, rigs] = await Promise.all([
+    lessonCells(db, departmentId, start, end),
+    closenessRows(db, departmentId, start, end),
+    trialsByRig(db, departmentId, start, end),
+  ]);
+  return { from, to, weeks: weeksOverlapping(from, to), cells, closeness, rigs };
+}
+
+function series(weeks: string[], cells: LessonCellRow[], key: (c: LessonCellRow) => { id: string; name: string }): WeeklySeries[] {
+  const index = new Map(weeks.map((w, i) => [w, i]));
+  const byId = new Map<string, WeeklySeries>();
+  for (const cell of cells) {
+    const { id, name } = key(cell);
+    let row = byId.get(id);
+    if (!row) byId.set(id, (row = { id, name, perWeek: weeks.map(() => 0), total: 0 }));
+    row.perWeek[index.get(cell.week)!]! += cell.lessons;
+    row.total += cell.lessons;
+  }
+  return [...byId.values()].sort((a, b) => a.name.localeCompare(b.name, "en"));
+}
+
+/** The overview for one department (totals only: no pupil names, answers or ids). */
+export async function departmentOverview(db: Db, departmentId: string, query: Query, now?: Date): Promise<DepartmentOverview> {
+  const { from, to, weeks, cells, closeness, rigs } = await load(db, departmentId, query, now);
+  const index = new Map(weeks.map((w, i) => [w, i]));
+  const pupilsPerWeek = weeks.map(() => 0);
+  for (const cell of cells) pupilsPerWeek[index.get(cell.week)!]! += cell.pupils;
+
+  const teacherNameOfClass = new Map(cells.map((c) => [c.classId, c.teacherName]));
+  const byClass = series(weeks, cells, (c) => ({ id: c.classId, name: c.className }));
+
+  const weekly = new Map(closeness.filter((r) => r.teacherId === null).map((r) => [r.week, r]));
+  const closenessByWeek: WeeklyCloseness[] = weeks.map((week) => {
+    const row = weekly.get(week);
+    return {
+      week,
+      trialsCompared: row?.trialsCompared ?? 0,
+      predictions: row?.predictions ?? 0,
+      shareWithin10: row && row.predictions > 0 ? row.within10 / row.predictions : null,
+      medianRelativeError: row?.medianRelError ?? null,
+    };
+  });
+
+  return {
+    from,
+    to,
+    timeZone: OVERVIEW_TIME_ZONE,
+    weeks,
+    totals: {
+      lessons: cells.reduce((n, c) => n + c.lessons, 0),
+      trialsRun: cells.reduce((n, c) => n + c.trialsRun, 0),
+      pupilsTakingPart: cells.reduce((n, c) => n + c.pupils, 0),
+      classesActive: new Set(cells.map((c) => c.classId)).size,
+      teachersActive: new Set(cells.map((c) => c.teacherId)).size,
+    },
+    lessonsByTeacher: series(weeks, cells, (c) => ({ id: c.teacherId, name: c.teacherName })),
+    lessonsByClass: byClass.map((row) => ({ ...row, teacherName: teacherNameOfClass.get(row.id) ?? "" })),
+    pupilsPerWeek,
+    trialsByRig: rigs,
+    closeness: closenessByWeek,
+  };
+}
+
+/**
+ * A text cell a spreadsheet would run as a formula, made inert with a leading apostrophe
+ * (common practice: OWASP "CSV Injection").
+ */
+export function neutraliseCell(text: string): string {
+  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+}
+
+export const OVERVIEW_CSV_HEADER = [
+  "Week starting (Monday, UTC)",
+  "Teacher",
+  "Class",
+  "Lessons",
+  "Trials run",
+  "Pupils taking part",
+  "Round-1 number predictions compared",
+  "Within 10 % of result (%)",
+  "Median relative error (%)",
+] as const;
+
+const percent = (value: number | null) => (value === null ? "" : (value * 100).toFixed(1));
+
+/** The overview as CSV: one row per week × teacher × class with lessons, totals only. */
+export async function departmentOverviewCsv(db: Db, departmentId: string, query: Query, now?: Date): Promise<{ from: string; to: string; csv: string }> {
+  const { from, to, cells, closeness } = await load(db, departmentId, query, now);
+  const fine = new Map(closeness.filter((r) => r.teacherId !== null).map((r) => [`${r.week}|${r.teacherId}|${r.classId}`, r]));
+  const rows = cells.map((cell) => {
+    const c = fine.get(`${cell.week}|${cell.teacherId}|${cell.classId}`);
+    return [
+      cell.week,
+      neutraliseCell(cell.teacherName),
+      neutraliseCell(cell.className),
+      cell.lessons,
+      cell.trialsRun,
+      cell.pupils,
+      c?.predictions ?? 0,
+      percent(c && c.predictions > 0 ? c.within10 / c.predictions : null),
+      percent(c?.medianRelError ?? null),
+    ];
+  });
+  const csv = Papa.unparse({ fields: [...OVERVIEW_CSV_HEADER], data: rows }, { newline: "\r\n" });
+  return { from, to, csv };
+}
