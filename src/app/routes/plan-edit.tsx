@@ -15,6 +15,7 @@ import { errorMessage } from "@/lib/api-client";
 import type { AppNavigationState } from "@/lib/navigation-state";
 import { RequireRole } from "../layouts/require-role";
 import { StartFromPlanDialog } from "../plans/start-from-plan-dialog";
+import { useMe } from "../use-me";
 
 export function Component() {
   return (
@@ -38,6 +39,7 @@ function PlanPage() {
   const plan = usePlan(planId);
   const navigate = useNavigate();
   const duplicate = useDuplicatePlan();
+  const me = useMe();
   const [starting, setStarting] = useState(false);
   useDocumentTitle(planId === null ? "New lesson plan" : (plan.data?.title ?? "Lesson plan"));
 
@@ -48,6 +50,7 @@ function PlanPage() {
         <PageHeader title="New lesson plan" description="Add the trials in the order you will run them. Each shows a sketch of its set-up and the theory’s value." />
         <PlanEditor
           plan={null}
+          departmentName={me.department?.name ?? null}
           onSaved={(saved) =>
             // Saved: the guard may pass, and the address becomes the plan's own.
             void navigate(`/plans/${saved.id}`, { replace: true, state: { leaveUnsaved: true } satisfies AppNavigationState })
@@ -84,7 +87,7 @@ function PlanPage() {
       {data.mine ? (
         <>
           <PageHeader title={data.title} eyebrow="Lesson plan" actions={startButton} />
-          <PlanEditor key={data.id} plan={data} onSaved={() => undefined} />
+          <PlanEditor key={data.id} plan={data} departmentName={me.department?.name ?? null} onSaved={() => undefined} />
         </>
       ) : (
         <>

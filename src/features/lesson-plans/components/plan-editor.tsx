@@ -30,9 +30,11 @@ import { TrialCard } from "./trial-card";
  * The plan editor: title, summary, sharing, and the trials in order (add, remove, move up and
  * down, edit each set-up with the board's own form). Asks before leaving with unsaved changes.
  */
-export function PlanEditor({ plan, onSaved }: {
+export function PlanEditor({ plan, departmentName = null, onSaved }: {
   /** The plan being changed, or null for a new one. */
   plan: LessonPlan | null;
+  /** The teacher's department (sharing reaches it); null when they have none, so sharing would reach nobody. */
+  departmentName?: string | null;
   /** After a save; `created` when it was a new plan (the page moves to its address). */
   onSaved: (plan: LessonPlan, created: boolean) => void;
 }) {
@@ -141,14 +143,20 @@ export function PlanEditor({ plan, onSaved }: {
             type="checkbox"
             className="mt-1 size-5"
             checked={draft.shared}
+            disabled={departmentName === null && !draft.shared}
+            aria-describedby="plan-share-hint"
             onChange={(e) => {
               const shared = e.target.checked;
               edit((d) => ({ ...d, shared }));
             }}
           />
           <span>
-            <span className="block font-bold">Share with my department</span>
-            <span className="text-ink-muted">Colleagues in your department can read it, start lessons with it and duplicate it. Only you can change it.</span>
+            <span className="block font-bold">{departmentName ? `Share with the ${departmentName} department` : "Share with my department"}</span>
+            <span id="plan-share-hint" className="text-ink-muted">
+              {departmentName === null
+                ? "You are not in a department yet, so there is nobody to share with: ask your school admin to add you to one."
+                : "Colleagues in your department can read it, start lessons with it and duplicate it. Only you can change it."}
+            </span>
           </span>
         </label>
       </section>
