@@ -1,4 +1,3 @@
-import Papa from "papaparse";
 import {
   OVERVIEW_TIME_ZONE,
   addDays,
@@ -13,6 +12,7 @@ import {
 } from "../contracts/department-overview";
 import type { z } from "zod";
 import type { Db } from "../db/client";
+import { toCsv } from "../http/csv";
 import { closenessRows, lessonCells, trialsByRig, type ClosenessRow, type LessonCellRow } from "./department-overview.repository";
 
 type Query = z.output<typeof overviewQuerySchema>;
@@ -102,14 +102,6 @@ export async function departmentOverview(db: Db, departmentId: string, query: Qu
   };
 }
 
-/**
- * A text cell a spreadsheet would run as a formula, made inert with a leading apostrophe
- * (common practice: OWASP "CSV Injection").
- */
-export function neutraliseCell(text: string): string {
-  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
-}
-
 export const OVERVIEW_CSV_HEADER = [
   "Week starting (Monday, UTC)",
   "Teacher",
@@ -132,8 +124,8 @@ export async function departmentOverviewCsv(db: Db, departmentId: string, query:
     const c = fine.get(`${cell.week}|${cell.teacherId}|${cell.classId}`);
     return [
       cell.week,
-      neutraliseCell(cell.teacherName),
-      neutraliseCell(cell.className),
+      cell.teacherName,
+      cell.className,
       cell.lessons,
       cell.trialsRun,
       cell.pupils,
@@ -142,6 +134,6 @@ export async function departmentOverviewCsv(db: Db, departmentId: string, query:
       percent(c?.medianRelError ?? null),
     ];
   });
-  const csv = Papa.unparse({ fields: [...OVERVIEW_CSV_HEADER], data: rows }, { newline: "\r\n" });
+  const csv = toCsv([...OVERVIEW_CSV_HEADER], rows);
   return { from, to, csv };
 }
