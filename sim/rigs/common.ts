@@ -3,19 +3,9 @@ import { z } from "zod";
 import { type ChainSpec, elementPattern, jointIterationsFor } from "../chain/link-shapes";
 import { World, type WorldSettings } from "../core/world";
 import { metres, mm, ms } from "../core/units";
-import { describedNumber } from "../params";
 import type { SceneShape } from "./rig";
 
 const { Bodies } = Matter;
-
-/**
- * The shipped time step. The fountain's height depends on it (matter-js does not converge
- * here; see DEVELOPERS.md "Simulation"): 0.25 ms with the shipped pile model puts a rod
- * chain's rise/drop near published measurements.
- */
-export const SHIPPED_DT = 0.00025;
-
-export const stepSchema = describedNumber("Time step", "s", 0.00003125, 0.001, SHIPPED_DT);
 
 /**
  * Solver settings shared by the rigs: predicted-angle lever arms, the solve the fountain, heap

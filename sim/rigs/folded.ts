@@ -1,25 +1,12 @@
-import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, type ElementSpec } from "../chain/link-shapes";
+import type { ElementSpec } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { G_SI, metres, mm } from "../core/units";
-import { describedNumber } from "../params";
 import { newSeries, type Settled } from "../probes/series";
 import { foldedChainAccel, foldedChainSpeedSquared } from "../theory/folded";
-import { rigSetup, staticCircle, stepSchema } from "./common";
+import { rigSetup, staticCircle } from "./common";
+import { foldedCatalogEntry, foldedSchema } from "./folded.params";
 import type { RigDefinition, SceneShape } from "./rig";
-
-export const foldedSchema = chainSchema.extend({
-  chainLength: describedNumber("Chain length", "m", 0.3, 3, 1),
-  dt: stepSchema,
-  /**
-   * Joint lever arms from the start of each step (default): links flip over fast in the bend,
-   * and the predicted-angle solve loses energy there (sim/core/world.test.ts). Off only to
-   * show that loss.
-   */
-  leverFromStepStart: z.boolean().default(true),
-});
-export type FoldedParams = z.output<typeof foldedSchema>;
 
 /*
  * Conventions, as in sim/theory/folded.ts (Calkin & March, Am. J. Phys. 57, 154 (1989)):
@@ -48,11 +35,7 @@ const BEND_SHARE = 0.05;
 const ARM_GAP_THICKNESSES = 3;
 
 export const foldedRig: RigDefinition<typeof foldedSchema> = {
-  id: "folded",
-  label: "Folded chain drop",
-  summary: "A chain hangs in a U from one fixed end; the other end, held level with it, is let go.",
-  schema: foldedSchema,
-  headline: { key: "accelRatio", label: "Free end's acceleration ÷ g (x from 0.4 L to 0.6 L)", unit: "" },
+  ...foldedCatalogEntry,
   create(params) {
     const { world, pattern, pitch, thickness } = rigSetup(params, { leverFromStepStart: params.leverFromStepStart });
     let links = Math.max(3, Math.round(mm(params.chainLength) / pitch));

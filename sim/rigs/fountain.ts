@@ -1,33 +1,18 @@
 import Matter from "matter-js";
-import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema, pickUpGeometry } from "../chain/link-shapes";
+import { pickUpGeometry } from "../chain/link-shapes";
 import { arc, type Point } from "../chain/path";
 import { seededRandom } from "../core/random";
 import { G_SI, metres, mm } from "../core/units";
 import type { PinJoint } from "../core/world";
-import { describedNumber } from "../params";
 import { newSeries, type Settled, settleOver, settleValues } from "../probes/series";
 import { fountainEnergyBudget, fountainSteady } from "../theory/fountain";
 import { idealAlphaBound } from "../theory/link-push";
-import { CALIBRATED_PILE_NOTE, ROD_KICK_MODEL_NOTE } from "../theory/theory-notes";
-import { rigSetup, staticBox, staticCircle, stepSchema } from "./common";
+import { rigSetup, staticBox, staticCircle } from "./common";
+import { fountainCatalogEntry, fountainSchema } from "./fountain.params";
 import type { RigDefinition, SceneShape } from "./rig";
 
 const { Body } = Matter;
-
-export const fountainSchema = chainSchema.extend({
-  potHeight: describedNumber("Height of the pot above the floor", "m", 0.2, 3, 1),
-  links: describedNumber("Number of links", "", 100, 4000, 1000, true),
-  potWidth: describedNumber("Inside width of the pot", "m", 0.04, 0.4, 0.11),
-  /** Pile model: how many rows on top of the pile move freely (the rest wait, frozen). */
-  looseRows: describedNumber("Loose rows on top of the pile", "", 2, 12, 3, true),
-  // At most 0.5: beyond it the energy budget would have the pile giving the chain energy.
-  theoryAlpha: describedNumber("Pot push α used by the theory line", "", 0, 0.5, 0.12),
-  theoryBeta: describedNumber("Floor pull β used by the theory line", "", 0, 0.4, 0),
-  dt: stepSchema,
-});
-export type FountainParams = z.output<typeof fountainSchema>;
 
 /** The rim stands this far above the top of the pile (sim-notes: a few mm, rounded). */
 const RIM_ABOVE_PILE_MM = 3;
@@ -51,12 +36,7 @@ const POT_PROBE_MM = 25;
 const FLOOR_PROBE_MM = 40;
 
 export const fountainRig: RigDefinition<typeof fountainSchema> = {
-  id: "fountain",
-  label: "Chain fountain",
-  summary: "A long chain pours out of a raised pot, leaps above the rim and falls to the floor.",
-  schema: fountainSchema,
-  headline: { key: "rise", label: "Rise above the rim", unit: "m" },
-  notes: [CALIBRATED_PILE_NOTE, ROD_KICK_MODEL_NOTE],
+  ...fountainCatalogEntry,
   create(params, seed) {
     const random = seededRandom(seed);
     // The predicted-angle joint solve is part of the fountain's calibration: with lever arms

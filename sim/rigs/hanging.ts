@@ -1,26 +1,11 @@
-import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { G_SI, metres, mm } from "../core/units";
-import { describedNumber } from "../params";
 import { newSeries, type Settled, settleOver } from "../probes/series";
 import { catenaryFromSpan } from "../theory/catenary";
-import { rigSetup, staticCircle, stepSchema } from "./common";
+import { rigSetup, staticCircle } from "./common";
+import { hangingCatalogEntry, hangingSchema } from "./hanging.params";
 import type { RigDefinition, SceneShape } from "./rig";
-
-export const hangingSchema = chainSchema
-  .extend({
-    span: describedNumber("Distance between the supports", "m", 0.2, 3, 1.6),
-    heightDifference: describedNumber("Right support higher by", "m", -1, 1, 0),
-    chainLength: describedNumber("Chain length", "m", 0.3, 5, 2),
-    dt: stepSchema,
-  })
-  .refine((p) => p.chainLength > Math.hypot(p.span, p.heightDifference) * 1.01, {
-    error: "chainLength: the chain must be at least 1 % longer than the straight line between the supports",
-    path: ["chainLength"],
-  });
-export type HangingParams = z.output<typeof hangingSchema>;
 
 /** Damped settling, then an undamped window the sag is read over (sim-notes: 0.05 for ~4 s). */
 const SETTLE_S = 3;
@@ -28,11 +13,7 @@ const MEASURE_S = 1;
 const SETTLING_DAMPING = 0.05;
 
 export const hangingRig: RigDefinition<typeof hangingSchema> = {
-  id: "hanging",
-  label: "Hanging chain",
-  summary: "A chain hangs between two supports and settles into its curve.",
-  schema: hangingSchema,
-  headline: { key: "sag", label: "Sag below the lower support", unit: "m" },
+  ...hangingCatalogEntry,
   create(params) {
     const { world, pattern, pitch } = rigSetup(params);
     const links = Math.max(2, Math.round(mm(params.chainLength) / pitch));

@@ -1,21 +1,12 @@
-import { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { seededRandom } from "../core/random";
 import { G_SI, metres, mm } from "../core/units";
-import { describedNumber } from "../params";
 import { newSeries, type Settled } from "../probes/series";
 import { heapLiftForce } from "../theory/heap";
-import { rigSetup, staticBox, stepSchema } from "./common";
+import { rigSetup, staticBox } from "./common";
+import { heapCatalogEntry, heapSchema } from "./heap.params";
 import type { RigDefinition, SceneShape } from "./rig";
-
-export const heapSchema = chainSchema.extend({
-  speed: describedNumber("Lifting speed", "m/s", 0.2, 3, 1),
-  liftHeight: describedNumber("Lift the end to", "m", 0.4, 2, 1.1),
-  dt: stepSchema,
-});
-export type HeapParams = z.output<typeof heapSchema>;
 
 /** The force is averaged while the end rises over this band (issue: 0.2 m to 1.0 m). */
 export const HEAP_BAND: [number, number] = [0.2, 1.0];
@@ -24,11 +15,7 @@ const RAMP_S = 0.04;
 const HEAP_WIDTH_MM = 60;
 
 export const heapRig: RigDefinition<typeof heapSchema> = {
-  id: "heap",
-  label: "Lifting a chain off a heap",
-  summary: "One end of a heaped chain is pulled straight up at a steady speed.",
-  schema: heapSchema,
-  headline: { key: "force", label: "Pulling force", unit: "N" },
+  ...heapCatalogEntry,
   create(params, seed) {
     const random = seededRandom(seed);
     const { world, pattern, pitch, thickness } = rigSetup(params);

@@ -42,7 +42,12 @@ export interface RigInstance {
   hidden?(index: number): boolean;
 }
 
-export interface RigDefinition<S extends z.ZodType = z.ZodType> {
+/**
+ * What the set-up form, the theory panel and the server need to know about a rig without
+ * building a world: kept apart from the builder so the staff pages' main thread never loads
+ * matter-js (sim/catalog.ts).
+ */
+export interface RigCatalogEntry<S extends z.ZodType = z.ZodType> {
   id: RigId;
   label: string;
   /** One line for pupils: what happens in this rig. */
@@ -52,5 +57,9 @@ export interface RigDefinition<S extends z.ZodType = z.ZodType> {
   notes?: string[];
   /** The value pupils are usually asked to predict, by default. */
   headline: { key: string; label: string; unit: string };
+}
+
+/** A catalog entry with its world builder (sim/index.ts: the worker, the server, the CLI, tests). */
+export interface RigDefinition<S extends z.ZodType = z.ZodType> extends RigCatalogEntry<S> {
   create(params: z.output<S>, seed: number): RigInstance;
 }

@@ -1,20 +1,12 @@
-import type { z } from "zod";
 import { buildChain, elementsFor } from "../chain/chain";
-import { chainSchema } from "../chain/link-shapes";
 import type { Point } from "../chain/path";
 import { seededRandom } from "../core/random";
 import { G_SI, metres, mm } from "../core/units";
-import { describedNumber } from "../params";
 import { newSeries, type Settled } from "../probes/series";
 import { FALLING_CHAIN_READING_RATIO, fallingChainScaleReading } from "../theory/scale";
-import { rigSetup, staticBox, stepSchema } from "./common";
+import { rigSetup, staticBox } from "./common";
+import { scaleCatalogEntry, scaleSchema } from "./scale.params";
 import type { RigDefinition, SceneShape } from "./rig";
-
-export const scaleSchema = chainSchema.extend({
-  chainLength: describedNumber("Chain length", "m", 0.3, 3, 1),
-  dt: stepSchema,
-});
-export type ScaleParams = z.output<typeof scaleSchema>;
 
 /**
  * Initial zigzag: each link leans this many degrees from the vertical, alternately left and
@@ -33,11 +25,7 @@ const AFTER_S = 0.1;
 export const SCALE_WINDOW: [number, number] = [0.25, 0.75];
 
 export const scaleRig: RigDefinition<typeof scaleSchema> = {
-  id: "scale",
-  label: "Chain falling onto a scale",
-  summary: "A chain hanging just above a scale pan is let go and piles up on the pan.",
-  schema: scaleSchema,
-  headline: { key: "readingRatio", label: "Reading ÷ weight already on the pan", unit: "" },
+  ...scaleCatalogEntry,
   create(params, seed) {
     const random = seededRandom(seed);
     const { world, pattern, pitch, thickness } = rigSetup(params);

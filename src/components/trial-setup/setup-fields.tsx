@@ -1,6 +1,6 @@
 import { LESSON_LIMITS } from "@contracts/lesson-rules";
 import { QUESTION_QUANTITIES, RIG_NAMES } from "@contracts/lesson-questions";
-import { LINK_SHAPE_LABELS, LINK_SHAPES, RIG_IDS, type LinkShape, type RigId } from "@sim/index";
+import { LINK_SHAPE_LABELS, LINK_SHAPES, RIG_IDS, type LinkShape, type RigId } from "@sim/catalog";
 import { Button } from "@/components/ui/button";
 import { ChoiceBar } from "@/components/ui/choice-bar";
 import { SelectField, TextField } from "@/components/ui/field";

@@ -1,7 +1,7 @@
 import type { TrialSetupInput, QuestionInput } from "@contracts/lessons";
 import { DISPLAY_UNITS, LESSON_LIMITS, parseTypedNumber } from "@contracts/lesson-rules";
 import { DEFAULT_QUESTIONS, QUESTION_QUANTITIES, quantityOf } from "@contracts/lesson-questions";
-import { LINK_SHAPES, numberMetaOf, RIGS, type LinkShape, type NumberMeta, type RigId } from "@sim/index";
+import { LINK_SHAPES, numberMetaOf, RIG_CATALOG, type LinkShape, type NumberMeta, type RigId } from "@sim/catalog";
 import type { z } from "zod";
 
 /** Parameters behind "More": the solver's step, pile details and the theory line's coefficients. */
@@ -17,7 +17,7 @@ export interface ParamField {
 
 /** The number parameters of a rig, in its schema's order, with label, unit, range and default. */
 export function paramFieldsFor(rig: RigId): ParamField[] {
-  const schema = RIGS[rig].schema as unknown as { shape?: Record<string, z.ZodType> };
+  const schema = RIG_CATALOG[rig].schema as unknown as { shape?: Record<string, z.ZodType> };
   const fields: ParamField[] = [];
   for (const [key, field] of Object.entries(schema.shape ?? {})) {
     const meta = numberMetaOf(field);

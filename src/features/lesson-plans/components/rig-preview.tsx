@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import type { ShownValue } from "@contracts/lessons";
-import { LINK_SHAPE_LABELS, type LinkShape, type RigId } from "@sim/index";
+import { LINK_SHAPE_LABELS, type LinkShape, type RigId } from "@sim/catalog";
 import { RIG_NAMES } from "@contracts/lesson-questions";
 import type { SetupDraft } from "@/components/trial-setup/setup-form";
 import { cx } from "@/lib/cx";

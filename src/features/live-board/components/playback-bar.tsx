@@ -1,5 +1,6 @@
 import { useId } from "react";
-import { seriesAt, type TrialRecording } from "@sim/index";
+import type { TrialRecording } from "@sim/catalog";
+import { seriesAt } from "@sim/run/playback";
 import { Button } from "@/components/ui/button";
 import { cx } from "@/lib/cx";
 import type { PlaybackController } from "../hooks/playback-controller";

@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState, type Ref } from "react";
 import type Konva from "konva";
 import { Circle, Layer, Line, Rect, Shape, Stage, Text } from "react-konva";
-import type { ElementLook, SceneLayout, SceneShape } from "@sim/index";
+import type { ElementLook, SceneLayout, SceneShape } from "@sim/catalog";
 import { cx } from "@/lib/cx";
 import { fitView, formatHeight, highestPoint, type StageFit } from "../utils/stage-fit";
 

@@ -1,5 +1,5 @@
 import type { ShownValue } from "@contracts/lessons";
-import { RIGS, type RigId } from "@sim/index";
+import { RIG_CATALOG, type RigId } from "@sim/catalog";
 import { CALIBRATED_PILE_NOTE, TYPICAL_ALPHA_NOTE } from "@sim/theory";
 import { TextField } from "@/components/ui/field";
 import { cx } from "@/lib/cx";
@@ -32,7 +32,7 @@ const watts = (w: number) => `${threeFigures(w)} W`;
  * pile was calibrated).
  */
 export function TheoryPanel({ rig, params, theory, unit, coefficients, className }: TheoryPanelProps) {
-  const notes = RIGS[rig].notes ?? [];
+  const notes = RIG_CATALOG[rig].notes ?? [];
   const fountain = rig === "fountain" ? fountainTheoryFor(params) : null;
   const t = fountain?.theory ?? null;
   const riseUnit = unit && perSi("m", unit) !== 1 ? unit : "cm";

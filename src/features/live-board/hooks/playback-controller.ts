@@ -1,4 +1,5 @@
-import { frameAt, recordingDuration, type SceneShape, type TrialRecording } from "@sim/index";
+import type { SceneShape, TrialRecording } from "@sim/catalog";
+import { frameAt, recordingDuration } from "@sim/run/playback";
 import { newClock, pause, play, replay, seek, setRate, SLOW_RATE, tick, timeAt, toggle, type ClockState } from "./playback-clock";
 
 export interface PlaybackSnapshot {

@@ -1,5 +1,5 @@
 import { useEffect, useState, useSyncExternalStore } from "react";
-import type { TrialRecording } from "@sim/index";
+import type { TrialRecording } from "@sim/catalog";
 import { PlaybackController, type PlaybackSnapshot } from "./playback-controller";
 
 /** One playback controller for the life of the board, fed the current recording. */

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from "react";
 import type { TeacherTrial } from "@contracts/lessons";
-import type { TrialRecording } from "@sim/index";
+import type { TrialRecording } from "@sim/catalog";
 import type { Send } from "../api/use-teacher-lesson";
 import { trialResultPayload } from "../utils/trial-result";
 

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from "react";
 import type { TrialPhase } from "@contracts/lesson-rules";
-import type { TrialRecording } from "@sim/index";
+import type { TrialRecording } from "@sim/catalog";
 import { createSimWorker } from "../worker/create-sim-worker";
 import type { RigPreview, SimReply, SimRequest } from "../worker/sim-messages";
 

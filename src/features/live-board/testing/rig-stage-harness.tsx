@@ -5,7 +5,8 @@
  */
 import { StrictMode, useEffect, useRef } from "react";
 import { createRoot } from "react-dom/client";
-import { frameAt, type TrialRecording } from "@sim/index";
+import type { TrialRecording } from "@sim/catalog";
+import { frameAt } from "@sim/run/playback";
 import "@/styles/app.css";
 import { RigStage, type RigStageHandle } from "../components/rig-stage";
 import { useTrialSimulation } from "../hooks/use-trial-simulation";

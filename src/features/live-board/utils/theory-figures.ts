@@ -1,4 +1,4 @@
-import { RIGS } from "@sim/index";
+import { RIG_CATALOG } from "@sim/catalog";
 import { pickUpGeometry } from "@sim/chain/link-shapes";
 import { fountainEnergyBudget, fountainSteady, idealAlphaBound } from "@sim/theory";
 
@@ -23,7 +23,7 @@ export interface FountainTheory {
  * typed. Null when the parameters do not parse or the theory refuses them (then `problem` says why).
  */
 export function fountainTheoryFor(params: Record<string, unknown>): { theory: FountainTheory | null; problem: string | null } {
-  const parsed = RIGS.fountain.schema.safeParse(params);
+  const parsed = RIG_CATALOG.fountain.schema.safeParse(params);
   if (!parsed.success) return { theory: null, problem: "Check the set-up: some values are outside their ranges." };
   const p = parsed.data;
   try {

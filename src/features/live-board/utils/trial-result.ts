@@ -1,5 +1,5 @@
 import type { TrialResultInput } from "@contracts/lessons";
-import type { TrialRecording } from "@sim/index";
+import type { TrialRecording } from "@sim/catalog";
 
 /**
  * A trial's seed: a fixed function of its id (FNV-1a, 31 bits), so a board that reloads, or a

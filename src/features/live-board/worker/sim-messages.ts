@@ -1,4 +1,4 @@
-import type { ElementLook, SceneLayout, SceneShape, TrialRecording } from "@sim/index";
+import type { ElementLook, SceneLayout, SceneShape, TrialRecording } from "@sim/catalog";
 
 /** What the board asks of the simulation worker. Any new request cancels the one before. */
 export type SimRequest =
