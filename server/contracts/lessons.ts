@@ -290,6 +290,8 @@ export interface TeacherLesson {
   className: string;
   status: "open" | "ended";
   showNames: boolean;
+  /** The plan the lesson started from, as titled then (null for none). */
+  planTitle: string | null;
   startedAt: string;
   endedAt: string | null;
   currentTrialId: string | null;

@@ -55,6 +55,7 @@ const lesson: TeacherLesson = {
   className: "Year 12 Physics (invented)",
   status: "open",
   showNames: false,
+  planTitle: "Two drops, one chain",
   startedAt: "2026-01-01T09:00:00Z",
   endedAt: null,
   currentTrialId: TRIAL_ID,
@@ -149,6 +150,8 @@ describe("the lesson board (against a stand-in server)", () => {
     const { page, problems } = await watchedPage(browser, base, { width: 1600, height: 900 });
     await page.goto(`${base}/lessons/${LESSON_ID}/board`);
     await page.getByText("ACE 347").waitFor({ timeout: 30_000 });
+    // The plan the lesson started from is named under the class.
+    await page.getByText("Plan: Two drops, one chain").waitFor();
 
     // Code and QR code at least 3 % of the screen's height (27 px here).
     const codeSize = await page.getByText("ACE 347").evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
@@ -195,6 +198,7 @@ describe("the lesson board (against a stand-in server)", () => {
     const { page, problems } = await watchedPage(browser, base, { width: 390, height: 844 });
     await page.goto(`${base}/lessons/${LESSON_ID}/remote`);
     await page.getByRole("heading", { name: /remote/ }).waitFor({ timeout: 30_000 });
+    await page.getByText("Plan: Two drops, one chain").waitFor();
 
     // Every button is at least 44 px tall.
     const heights = await page.getByRole("button").evaluateAll((els) => els.filter((el) => (el as HTMLElement).offsetParent !== null).map((el) => el.getBoundingClientRect().height));

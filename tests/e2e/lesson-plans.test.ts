@@ -107,6 +107,7 @@ describe("lesson plans", () => {
     await page.waitForURL(/\/lessons\/[0-9a-f-]+\/board$/);
     const lessonId = page.url().split("/").at(-2)!;
     await page.getByRole("heading", { name: /Trial 1 of 2: Fountain rig/ }).waitFor();
+    await page.getByText("Plan: Two drops, two chains").waitFor();
     await expect.poll(() => page.getByLabel(POT_HEIGHT).inputValue()).toBe("1.5");
     await keepScreenshot(page, "e2e", "54-board-from-plan");
 

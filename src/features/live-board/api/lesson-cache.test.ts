@@ -40,6 +40,7 @@ const lesson: TeacherLesson = {
   className: "Year 12 Physics (invented)",
   status: "open",
   showNames: false,
+  planTitle: null,
   startedAt: "2026-01-01T09:00:00Z",
   endedAt: null,
   currentTrialId: "T2",

@@ -96,6 +96,7 @@ export function BoardLayout({ lesson, send, status, graphPanel, tallyPanel, onBo
             {lesson.className}
             {trial ? <span className="font-normal text-ink-muted"> · Trial {trialNumber} of {lesson.trials.length}: {trial.rigLabel}</span> : null}
           </h1>
+          {lesson.planTitle ? <p className="text-[max(0.9rem,1.8vh)] text-ink-muted">Plan: {lesson.planTitle}</p> : null}
           {trial ? <PhaseSteps phase={trial.phase} question={trial.question} /> : null}
           {status}
         </div>

@@ -35,6 +35,7 @@ export function LessonRemote({ lessonId, tallyPanel }: { lessonId: string; tally
     <div className="mx-auto grid max-w-prose gap-6 px-4 py-4">
       <header className="grid gap-2">
         <h1 className="text-2xl font-bold">{lesson.className}: remote</h1>
+        {lesson.planTitle ? <p className="text-ink-muted">Plan: {lesson.planTitle}</p> : null}
         <p>
           Code <span className="font-mono text-xl font-bold tracking-widest">{lesson.code}</span> · {joinedCountOf(lesson)} joined
         </p>
