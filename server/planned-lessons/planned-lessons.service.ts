@@ -25,7 +25,9 @@ export async function planLesson(db: Db, actor: Actor, input: z.output<typeof pl
   const cls = await classForActor(db, actor, input.classId, "write");
   if (cls.archivedAt) throw new AppError("bad_request", "This class is archived: restore it to plan a lesson with it.");
   const plan = input.planId
-    ? await planForStart(db, actor, input.planId).catch(() => {
+    ? await planForStart(db, actor, input.planId).catch((error: unknown) => {
+        // A plan the teacher cannot see is a mistake in the form, not a missing page.
+        if (!(error instanceof AppError && error.code === "not_found")) throw error;
         throw new AppError("validation_failed", "Some of the details need correcting.", {
           planId: ["That plan was not found among yours or your department's."],
         });
@@ -35,19 +37,15 @@ export async function planLesson(db: Db, actor: Actor, input: z.output<typeof pl
     .insert(plannedLessons)
     .values({ classId: cls.id, teacherId: actor.id, planId: plan?.id ?? null, plannedFor: input.plannedFor })
     .returning();
-  const [item] = (await upcoming(db, actor, new Date(0))).filter((u) => u.id === row!.id);
-  // Listed as long as it is upcoming; a time earlier today is still returned as planned.
-  return (
-    item ?? {
-      id: row!.id,
-      classId: cls.id,
-      className: cls.name,
-      planId: plan?.id ?? null,
-      planTitle: plan?.title ?? null,
-      trialCount: null,
-      plannedFor: row!.plannedFor.toISOString(),
-    }
-  );
+  return {
+    id: row!.id,
+    classId: cls.id,
+    className: cls.name,
+    planId: plan?.id ?? null,
+    planTitle: plan?.title ?? null,
+    trialCount: plan ? plan.trials.length : null,
+    plannedFor: row!.plannedFor.toISOString(),
+  };
 }
 
 /** The teacher's own planned lesson, not yet started (anyone else's is "not found"). */
