@@ -9,7 +9,7 @@ import { isApiError, errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
 import { STAFF_ROLE_LABELS } from "@contracts/staff-roles";
 import { useRemoveStaff } from "../api/remove-staff";
-import { useUpdateStaffRole } from "../api/update-staff-role";
+import { useUpdateStaff } from "../api/update-staff";
 
 const ROLE_ORDER: readonly StaffRole[] = ["teacher", "head_of_department", "admin"];
 
@@ -47,7 +47,7 @@ const CELL_LABEL = "block text-sm font-bold text-ink-muted md:hidden";
 function StaffRow({ member, isViewer }: { member: StaffMember; isViewer: boolean }) {
   const [role, setRole] = useState<StaffRole>(member.role);
   const [message, setMessage] = useState<{ tone: "ok" | "danger"; text: string } | null>(null);
-  const update = useUpdateStaffRole();
+  const update = useUpdateStaff();
   const id = useId();
   const changed = role !== member.role;
   const demotingSelf = isViewer && changed && role !== "admin";
