@@ -23,7 +23,17 @@ export const staffMemberSchema = z.object({
 });
 export type StaffMember = z.infer<typeof staffMemberSchema>;
 
-export const updateStaffRoleInputSchema = z.object({
-  role: staffRoleSchema,
-});
-export type UpdateStaffRoleInput = z.infer<typeof updateStaffRoleInputSchema>;
+/**
+ * What an admin may change about a member of staff: their role, their department (`null` for
+ * none), or both in one request. Whether the result is allowed (a head keeps a department, the
+ * department is the school's own) is checked by the server.
+ */
+export const updateStaffInputSchema = z
+  .object({
+    role: staffRoleSchema.optional(),
+    departmentId: z.uuid("Choose a department from the list.").nullable().optional(),
+  })
+  .refine((input) => input.role !== undefined || input.departmentId !== undefined, {
+    message: "Choose a new role or department to save.",
+  });
+export type UpdateStaffInput = z.infer<typeof updateStaffInputSchema>;

@@ -101,6 +101,15 @@ export async function findStaffMember(db: Pick<Db, "select">, schoolId: string, 
   return row;
 }
 
+/** The school's department with this id, or undefined (another school's counts as unknown). */
+export async function findDepartment(db: Pick<Db, "select">, schoolId: string, id: string) {
+  const [row] = await db
+    .select({ id: departments.id })
+    .from(departments)
+    .where(and(eq(departments.id, id), eq(departments.schoolId, schoolId)));
+  return row;
+}
+
 export function toStaffMember(row: {
   id: string;
   displayName: string;

@@ -1,7 +1,7 @@
 /**
  * In a real browser against the real server, Postgres and local SMTP server: the school admin
  * invites a teacher and reads the captured e-mail; the invited teacher follows its link and
- * signs in; the admin's pupil-data and privacy pages.
+ * signs in; the admin moves her between departments; the admin's pupil-data and privacy pages.
  */
 import { describe, expect, it } from "vitest";
 import { keepScreenshot, pickAccount, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
@@ -60,7 +60,25 @@ describe("the school admin in the browser", () => {
     await page.getByText("noor.haddad@brackenfold.example").first().waitFor();
     await page.getByRole("region", { name: "Invitations waiting" }).getByText("No invitations waiting").waitFor();
 
-    expect(problems).toEqual([]);
+    // The admin moves her out of Science and back; each choice is still there after a reload.
+    const department = page.getByRole("combobox", { name: "Department for Noor Haddad" });
+    for (const [label, value] of [["None", ""], ["Science", null]] as const) {
+      await department.selectOption({ label });
+      await page.getByRole("button", { name: "Save department for Noor Haddad" }).click();
+      await page.getByText("Their classes stay where they were.").waitFor();
+      await page.reload();
+      await department.waitFor();
+      expect(await department.evaluate((select: HTMLSelectElement) => select.selectedOptions[0]?.textContent)).toBe(label);
+      if (value !== null) expect(await department.inputValue()).toBe(value);
+    }
+    // A head of department cannot be left without one: the server's reason shows beside the choice.
+    await page.getByRole("combobox", { name: "Department for Helen Marrable" }).selectOption({ label: "None" });
+    await page.getByRole("button", { name: "Save department for Helen Marrable" }).click();
+    await page.getByRole("alert").getByText("A head of department must keep a department").waitFor();
+    await keepScreenshot(page, "e2e", "09b-admin-staff-departments");
+
+    // The one refused request is the head's move above.
+    expect(problems).toEqual(["Failed to load resource: the server responded with a status of 400 (Bad Request)"]);
     await context.close();
   });
 

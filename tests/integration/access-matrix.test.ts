@@ -212,6 +212,14 @@ const ROUTES: RouteCase[] = [
     body: () => ({ role: "teacher" }),
     expected: { anonymous: 401, teacherA: 403, teacherB: 403, head: 403, otherHead: 403, elsewhere: 403, admin: 200 },
   },
+  {
+    // The same route moving someone between departments (teacher B is already in this one: no change).
+    route: "PATCH /api/staff/:id (department)",
+    method: "PATCH",
+    path: (f) => `/api/staff/${f.staffIds.teacherB}`,
+    body: (_caller, f) => ({ departmentId: f.departmentId }),
+    expected: adminOnly(200),
+  },
   { route: "DELETE /api/staff/:id", method: "DELETE", path: (f) => `/api/staff/${f.staffIds.leaver}`, expected: adminOnly(204) },
   { route: "GET /api/invitations", method: "GET", path: () => "/api/invitations", expected: adminOnly(200) },
   {

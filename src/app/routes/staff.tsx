@@ -35,7 +35,7 @@ function StaffPage() {
       <PageHeader
         eyebrow={me.school.name}
         title="Staff"
-        description="Who can sign in to Linkleap, and what each person can do. Invite colleagues, change a role and save it on that row, or remove someone’s access."
+        description="Who can sign in to Linkleap, and what each person can do. Invite colleagues, change a department or role and save it on that row, or remove someone’s access."
       />
       <div className="grid gap-6">
         <Section title="Invite a member of staff" description="They get an e-mail with a link; signing in with that address puts them on the list below.">
@@ -44,7 +44,7 @@ function StaffPage() {
         <Section title="Invitations waiting">
           <InvitationList />
         </Section>
-        <Section title="Staff and roles">
+        <Section title="Staff, departments and roles">
           {staff.isPending ? (
             <SkeletonList rows={4} label="Loading the staff list…" />
           ) : staff.isError ? (
