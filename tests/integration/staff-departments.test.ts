@@ -4,45 +4,25 @@
  * were made, and keeps every head of department in a department.
  */
 import { and, eq, ne } from "drizzle-orm";
-import { io as connect, type Socket } from "socket.io-client";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { ApiErrorBody } from "../../server/contracts/errors";
 import type { SessionInfo } from "../../server/contracts/session";
-import { PROTOCOL_VERSION, type ClientToServerEvents, type ServerToClientEvents } from "../../server/contracts/socket-events";
 import type { StaffMember } from "../../server/contracts/staff";
 import { auditEvents, classes, departments, staff } from "../../server/db/schema";
 import { PEOPLE, seedFixture, type PersonKey } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
+import { SocketPool } from "../support/lesson-client";
 import { useTestStack } from "../support/test-stack";
 
-type ClientSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
 const ctx = useTestStack(seedFixture);
-const sockets: ClientSocket[] = [];
+const pool = new SocketPool(() => ctx.stack.url);
 let admin: HttpAgent;
 
 beforeAll(async () => {
   admin = new HttpAgent(ctx.stack.url);
   await signIn(admin, PEOPLE.admin.email);
 });
-afterAll(() => {
-  for (const s of sockets) s.close();
-});
-
-async function openSocket(agent: HttpAgent): Promise<ClientSocket> {
-  const socket: ClientSocket = connect(ctx.stack.url, {
-    transports: ["websocket"],
-    auth: { protocol: PROTOCOL_VERSION },
-    extraHeaders: { cookie: agent.cookieHeader() },
-    reconnection: false,
-    forceNew: true,
-  });
-  sockets.push(socket);
-  await new Promise<void>((resolve, reject) => {
-    socket.once("connect", resolve);
-    socket.once("connect_error", reject);
-  });
-  return socket;
-}
+afterAll(() => pool.closeAll());
 
 const patch = <T>(agent: HttpAgent, who: PersonKey, json: unknown) =>
   agent.json<T>(`/api/staff/${ctx.fixture.staffIds[who]}`, { method: "PATCH", json });
@@ -63,7 +43,7 @@ describe("an admin moving staff between departments", () => {
     const teacher = new HttpAgent(ctx.stack.url);
     await signIn(teacher, PEOPLE.teacherB.email);
     expect((await teacher.json<SessionInfo>("/api/session")).body.user?.department?.name).toBe("Science");
-    const socket = await openSocket(teacher);
+    const socket = await pool.open({ agent: teacher });
     const told = new Promise<void>((resolve) => socket.once("session:changed", resolve));
 
     const { status, body } = await patch<StaffMember>(admin, "teacherB", { departmentId: ctx.fixture.mathsId });
