@@ -6,7 +6,7 @@
 import { PNG } from "pngjs";
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import { keepScreenshot, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
+import { keepScreenshot, openClassFromHome, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
 
 const ctx = useDemoInBrowser();
 
@@ -50,7 +50,7 @@ describe("real runs on the class page", () => {
   it("a typed run and a photo measurement appear on the graph and in the table", async () => {
     const { context, page, problems } = await watchedPage(ctx.browser, ctx.stack.url);
     await signInAs(page, ctx.stack.url, "Tom Ashdown");
-    await page.getByRole("link", { name: /10A Physics/ }).first().click();
+    await openClassFromHome(page, "10A Physics");
     await page.getByRole("heading", { name: "Real runs" }).waitFor();
     await page.getByText("No real runs yet").waitFor();
     await page.getByRole("heading", { name: /Safety card/ }).waitFor();

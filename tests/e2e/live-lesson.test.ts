@@ -12,7 +12,7 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import type { OpenLesson } from "../../server/contracts/lessons";
 import { predictions, trials } from "../../server/db/schema";
-import { keepScreenshot, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
+import { keepScreenshot, openClassFromHome, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
 import { drawnOnCanvas } from "../support/chart-canvas";
 
 const ctx = useDemoInBrowser();
@@ -29,7 +29,7 @@ describe("a live lesson, board and pupils", () => {
     const board = teacher.page;
     await signInAs(board, ctx.stack.url, "Tom Ashdown");
     // The demo's Year 12 class has three real runs, which join the lesson's fountain graph.
-    await board.getByRole("link", { name: /12 Physics, set 1/ }).first().click();
+    await openClassFromHome(board, "12 Physics, set 1");
     await board.getByRole("heading", { name: "Live lessons" }).waitFor();
     await board.getByRole("button", { name: "Start a live lesson" }).click();
     await board.waitForURL(/\/lessons\/[0-9a-f-]+\/board$/);

@@ -3,7 +3,7 @@
  * and offers no save; a good file replaces the roster. Also the real-demonstrations guide.
  */
 import { describe, expect, it } from "vitest";
-import { keepScreenshot, pickAccount, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
+import { keepScreenshot, openClassFromHome, pickAccount, signInAs, useDemoInBrowser, watchedPage } from "../support/browser";
 
 const ctx = useDemoInBrowser();
 
@@ -11,8 +11,7 @@ describe("roster upload in the browser", () => {
   it("previews each row, refuses a file with a bad row, and saves a good one", async () => {
     const { context, page, problems } = await watchedPage(ctx.browser, ctx.stack.url);
     await signInAs(page, ctx.stack.url, "Tom Ashdown");
-    await page.getByRole("link", { name: /12 Physics, set 1/ }).first().click();
-    await page.getByRole("heading", { name: "12 Physics, set 1" }).waitFor();
+    await openClassFromHome(page, "12 Physics, set 1");
     // The demo roster is there (the roster loads after the class heading).
     await page.getByRole("form", { name: "Roster" }).getByRole("textbox").first().waitFor();
 

@@ -63,6 +63,15 @@ export async function signInAs(page: Page, appUrl: string, name: string, landing
   await page.waitForURL(`${appUrl}${landing}`);
 }
 
+/**
+ * Opens a class from home's "Your classes". Scoped to that section because "Recent lessons" also
+ * links by class name, and whichever list loads first would otherwise take the click.
+ */
+export async function openClassFromHome(page: Page, className: string): Promise<void> {
+  await page.getByRole("region", { name: "Your classes" }).getByRole("link", { name: className }).first().click();
+  await page.getByRole("heading", { name: className }).waitFor();
+}
+
 export async function pickAccount(page: Page, name: string): Promise<void> {
   await page.getByRole("link", { name: "Sign in with your school account" }).click();
   await page.getByRole("button", { name: new RegExp(name) }).click();
