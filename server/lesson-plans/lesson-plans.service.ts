@@ -1,15 +1,15 @@
 import type { z } from "zod";
 import type { RigId } from "../../sim";
-import { RIG_NAMES, quantityOf } from "../contracts/lesson-questions";
+import { RIG_NAMES } from "../contracts/lesson-questions";
 import { PLAN_LIMITS, lessonPlanInputSchema, type LessonPlan, type LessonPlanListItem, type PlanPreview, type PlanTrial } from "../contracts/lesson-plans";
-import { perSiOf } from "../contracts/lesson-rules";
-import type { ShownValue, TrialSetup, trialSetupSchema } from "../contracts/lessons";
+import type { TrialSetup, trialSetupSchema } from "../contracts/lessons";
 import type { FieldErrors } from "../contracts/errors";
 import type { Db } from "../db/client";
 import { AppError } from "../http/app-error";
 import { parseInput } from "../http/validate";
-import { checkSetup, theoryFor } from "../lessons/lessons.service";
+import { checkSetup } from "../lessons/lessons.service";
 import { shownParamsOf } from "../lessons/lessons.views";
+import { theoryInQuestionUnit } from "../lessons/setup-theory";
 import type { Actor } from "../staff/staff.repository";
 import { planForActor } from "./lesson-plans.access";
 import * as repo from "./lesson-plans.repository";
@@ -30,32 +30,6 @@ function checkTrials(trials: z.output<typeof trialSetupSchema>[]): TrialSetup[] 
   });
   if (Object.keys(fields).length) throw new AppError("validation_failed", "Some of the details need correcting.", fields);
   return checked as TrialSetup[];
-}
-
-/**
- * The fountain's theory does not depend on how many links the chain has (only on the drop, α, β,
- * λ and the link's shape; checked in lesson-plans.service.test.ts), so plans work it out on the
- * shortest chain the rig allows: building 1000 links costs 70–150 ms a trial, 100 links a few ms.
- */
-export const THEORY_LINKS = 100;
-export const theoryParams = (setup: Pick<TrialSetup, "rig" | "params">) =>
-  setup.rig === "fountain" ? { ...setup.params, links: THEORY_LINKS } : setup.params;
-
-/**
- * The closed-form value for a set-up in the question's unit, as the board shows it (the theory
- * is worked out by the rig itself, the same as for a live trial; cached per set-up).
- */
-export function theoryInQuestionUnit(setup: TrialSetup): ShownValue | null {
-  const quantity = quantityOf(setup.rig, setup.question.quantity);
-  const per = quantity ? perSiOf(quantity.siUnit, setup.question.unit) : null;
-  if (!quantity || per === null) return null;
-  let si: number | undefined;
-  try {
-    si = theoryFor(setup.rig, theoryParams(setup), 1)[setup.question.quantity];
-  } catch {
-    return null;
-  }
-  return si === undefined || !Number.isFinite(si) ? null : { value: si * per, uncertainty: null, unit: setup.question.unit };
 }
 
 function planTrial(setup: TrialSetup): PlanTrial {

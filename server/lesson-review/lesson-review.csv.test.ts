@@ -60,6 +60,23 @@ describe("the exports", () => {
     expect(back.data[1]).toMatchObject({ "prediction (cm)": "", "prediction (mm)": "-0.5", "result (mm)": "", "within 10 %": "" });
   });
 
+  it("keep an explanation from a pupil who made no prediction, on a row of its own", () => {
+    const t = trial(1, "cm", 1, 14.3);
+    t.predictions = [
+      { id: "p1", participantId: "x", pupil: "Ana B.", round: 1, value: 12, choice: null, choiceLabel: null, reason: "", closeness: null, submittedAt: "2026-11-30T09:10:00.000Z" },
+    ];
+    t.explanations = [
+      { id: "e1", participantId: "x", pupil: "Ana B.", text: "The pile pushes up.", shown: false, submittedAt: "2026-11-30T09:21:00.000Z" },
+      { id: "e2", participantId: "y", pupil: "Ben C.", text: "+ it flings out", shown: true, submittedAt: "2026-11-30T09:22:00.000Z" },
+    ];
+    const back = parse(predictionsCsv(review([t])));
+    expect(back.data.map((r) => [r.pupil, r.round, r["prediction (cm)"], r.explanation])).toEqual([
+      ["Ana B.", "before the run", "12", "The pile pushes up."],
+      ["Ben C.", "", "", "'+ it flings out"],
+    ]);
+    expect(back.data[1]).toMatchObject({ "result (cm)": "14.3", "submitted at (UTC)": "2026-11-30T09:22:00.000Z" });
+  });
+
   it("give one results row per trial, run or not", () => {
     const back = parse(resultsCsv(review([trial(1, "cm", 1, 14.3), trial(2, "cm", 1.5, null)])));
     expect(back.data.map((r) => [r.trial, r["height of the pot above the floor (m)"], r["result (cm)"]])).toEqual([

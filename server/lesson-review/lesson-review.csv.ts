@@ -44,7 +44,8 @@ const inUnitColumns = (units: string[], unit: string, value: number | null): Csv
 /**
  * One row per prediction from a pupil's device (a show of hands has no pupil: its answers are
  * counted in the results export). Numbers in the question's unit, named in the column header.
- * The pupil's explanation of the trial is on each of their rows for it (so on the re-vote row too).
+ * The pupil's explanation of the trial is on each of their rows for it (so on the re-vote row too);
+ * an explanation from a pupil with no prediction for the trial has a row with the round left empty.
  */
 export function predictionsCsv(review: LessonReview): string {
   const units = unitsOf(review);
@@ -91,6 +92,31 @@ export function predictionsCsv(review: LessonReview): string {
         percent(p.closeness?.absoluteRelativeError),
         p.closeness ? (p.closeness.within10 ? "yes" : "no") : null,
         p.submittedAt,
+      ]);
+    }
+    // A pupil may explain without having predicted (joined late, say): their explanation gets a
+    // row of its own, with no round and no prediction, so no export loses it.
+    const predicted = new Set(t.predictions.map((p) => p.participantId));
+    const unpaired = t.explanations.filter((e) => !predicted.has(e.participantId));
+    for (const participantId of new Set(unpaired.map((e) => e.participantId))) {
+      const mine = unpaired.filter((e) => e.participantId === participantId);
+      rows.push([
+        t.position,
+        t.rigLabel,
+        t.question.prompt,
+        ...paramCells(t, params),
+        mine[0]!.pupil,
+        null,
+        ...inUnitColumns(units, unit, null),
+        null,
+        null,
+        mine.map((e) => e.text).join(" / "),
+        ...inUnitColumns(units, unit, sig(t.result?.value)),
+        ...inUnitColumns(units, unit, sig(t.theory?.value)),
+        null,
+        null,
+        null,
+        mine[0]!.submittedAt,
       ]);
     }
   }

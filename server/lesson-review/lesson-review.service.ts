@@ -8,6 +8,7 @@ import type { Db } from "../db/client";
 import { forbidden, notFound } from "../http/app-error";
 import { findLessonWithClass, loadLessonBundle } from "../lessons/lessons.repository";
 import { resultOf, shownParamsOf, theoryOf, type LessonBundle, type TrialRow } from "../lessons/lessons.views";
+import { theoryInQuestionUnit } from "../lessons/setup-theory";
 import type { Actor } from "../staff/staff.repository";
 
 const lessonNotFound = () => notFound("That lesson");
@@ -75,7 +76,8 @@ function summariesOf(trial: TrialRow, rows: LessonBundle["predictions"], result:
 function reviewTrial(trial: TrialRow, bundle: LessonBundle, names: Map<string, string>): ReviewTrial {
   const rig = trial.rig as RigId;
   const result = resultOf(trial);
-  const theory = trial.ranAt ? theoryOf(trial) : null;
+  // A trial not yet run has no stored theory: work it out from its set-up, as the board shows it.
+  const theory = trial.ranAt ? theoryOf(trial) : theoryInQuestionUnit({ rig, params: trial.params, question: trial.question });
   const question = trial.question;
   const rows = bundle.predictions.filter((p) => p.trialId === trial.id);
   return {

@@ -7,6 +7,7 @@ import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { PlanPreview } from "../../server/contracts/lesson-plans";
 import type { LessonReview } from "../../server/contracts/lesson-review";
 import type { LessonListItem, TeacherLesson } from "../../server/contracts/lessons";
 import { lessons } from "../../server/db/schema";
@@ -74,6 +75,15 @@ beforeAll(async () => {
   await predict(ben, second, 1, 210, "Higher drop, higher rise");
   await ok(teacher, "trial:phase", { trialId: second, phase: "observe" });
   await ok(teacher, "trial:result", { trialId: second, seed: 4, measured: rise(0.2), run });
+  // A pupil who joins late explains without having predicted.
+  await ok(teacher, "trial:phase", { trialId: second, phase: "explain" });
+  const dee = await joinAs(pool, code, "Dee F.");
+  await ok(dee.socket, "explanation:submit", { trialId: second, clientId: randomUUID(), text: "It falls further, so it is faster." });
+
+  // Trial 3: set up but never run.
+  const { trialId: third } = await ok<{ trialId: string }>(teacher, "trial:add", { lessonId, copyOf: null });
+  trialIds.push(third);
+  await ok(teacher, "trial:setup", { trialId: third, rig: "fountain", params: { potHeight: 2 }, question: { kind: "number", prompt: "From 2 m?", quantity: "rise", unit: "cm" } });
   await ok(teacher, "lesson:end", { lessonId });
 });
 afterAll(() => pool.closeAll());
@@ -83,8 +93,8 @@ describe("the lesson review", () => {
     const { status, body } = await agents.teacherA.json<LessonReview>(`/api/lessons/${lessonId}/review`);
     expect(status).toBe(200);
     expect(body.lesson).toMatchObject({ id: lessonId, className: "11X Physics", status: "ended", planTitle: "Fountain: rise against drop" });
-    expect(body.participants.map((p) => p.displayName)).toEqual(["Ana B.", "Ben C.", "=1+1"]);
-    const [t1, t2] = body.trials;
+    expect(body.participants.map((p) => p.displayName)).toEqual(["Ana B.", "Ben C.", "=1+1", "Dee F."]);
+    const [t1, t2, t3] = body.trials;
     expect(t1!.shownParams.find((p) => p.key === "potHeight")).toMatchObject({ value: 1, unit: "m" });
     expect(t1!.result!.value).toBeCloseTo(14.3, 9);
     expect(t1!.result!.unit).toBe("cm");
@@ -113,6 +123,16 @@ describe("the lesson review", () => {
     expect(t2!.result).toMatchObject({ unit: "mm" });
     expect(t2!.result!.value).toBeCloseTo(200, 9);
     expect(t2!.predictions[0]!.closeness!.signedRelativeError).toBeCloseTo(0.05, 12);
+    // A trial never run has no result, but the theory of its set-up, as the plan editor shows it.
+    expect(t3!.ranAt).toBeNull();
+    expect(t3!.result).toBeNull();
+    const preview = await agents.teacherA.json<PlanPreview>("/api/lesson-plans/preview", {
+      method: "POST",
+      json: { rig: "fountain", params: { potHeight: 2 }, question: { kind: "number", prompt: "From 2 m?", quantity: "rise", unit: "cm" } },
+    });
+    expect(preview.status).toBe(200);
+    expect(t3!.theory).toEqual(preview.body.theory);
+    expect(t3!.theory!.value).toBeGreaterThan(t1!.theory!.value); // a longer drop, a higher rise
 
     const ben = body.pupils.find((p) => p.displayName === "Ben C.")!;
     expect(ben.predictions.map((p) => [p.position, p.round, p.value])).toEqual([
@@ -144,7 +164,7 @@ describe("the lesson review", () => {
 
   it("lists the class's lessons with their plan, trials run and pupils taking part", async () => {
     const { body } = await agents.teacherA.json<LessonListItem[]>(`/api/classes/${ctx.fixture.classA}/lessons`);
-    expect(body.find((l) => l.id === lessonId)).toMatchObject({ status: "ended", planTitle: "Fountain: rise against drop", trialCount: 2, trialsRun: 2, participantCount: 3 });
+    expect(body.find((l) => l.id === lessonId)).toMatchObject({ status: "ended", planTitle: "Fountain: rise against drop", trialCount: 3, trialsRun: 2, participantCount: 4 });
   });
 });
 
@@ -165,21 +185,23 @@ describe("the CSV exports", () => {
     );
     const review = (await agents.teacherA.json<LessonReview>(`/api/lessons/${lessonId}/review`)).body;
     const expected = review.trials.flatMap((t) => t.predictions.map((p) => ({ trial: String(t.position), value: String(p.value), unit: t.question.unit, round: p.round })));
-    expect(parsed.data).toHaveLength(expected.length);
-    parsed.data.forEach((row, i) => {
+    // The last row is the late joiner's explanation, with no prediction.
+    expect(parsed.data).toHaveLength(expected.length + 1);
+    expect(parsed.data.at(-1)).toMatchObject({ trial: "2", pupil: "Dee F.", round: "", "prediction (mm)": "", explanation: "It falls further, so it is faster.", "result (mm)": "200" });
+    parsed.data.slice(0, -1).forEach((row, i) => {
       expect(row.trial).toBe(expected[i]!.trial);
       expect(row[`prediction (${expected[i]!.unit})`]).toBe(expected[i]!.value);
       expect(row.round).toBe(expected[i]!.round === 1 ? "before the run" : "re-vote");
     });
     // Text starting with a formula character comes back neutralised; numbers stay numbers.
-    expect(parsed.data.map((r) => r.pupil)).toEqual(["Ana B.", "Ben C.", "'=1+1", "Ana B.", "Ben C."]);
+    expect(parsed.data.map((r) => r.pupil)).toEqual(["Ana B.", "Ben C.", "'=1+1", "Ana B.", "Ben C.", "Dee F."]);
     expect(parsed.data[0]!.reason).toBe("'=1+1");
     expect(parsed.data[1]!.reason).toBe("'@it falls back in");
     expect(parsed.data[1]!["prediction (cm)"]).toBe("-0.5");
     expect(text).toContain(",-0.5,");
     expect(parsed.data[2]!.reason).toBe('The pile pushes it up, "like a spring", I think');
     // Explanations are on their pupil's rows, neutralised too.
-    expect(parsed.data.map((r) => r.explanation)).toEqual(["'=1+1 is what the pile adds.", "The links are jerked up off the pile.", "", "'=1+1 is what the pile adds.", ""]);
+    expect(parsed.data.map((r) => r.explanation)).toEqual(["'=1+1 is what the pile adds.", "The links are jerked up off the pile.", "", "'=1+1 is what the pile adds.", "", "It falls further, so it is faster."]);
     expect(parsed.data[0]!["result (cm)"]).toBe("14.3");
     expect(parsed.data[0]!["relative error (%)"]).toBe("-16.1"); // (12 − 14.3)/14.3 = −16.08 %
     expect(parsed.data[4]!["prediction (mm)"]).toBe("210");
@@ -197,12 +219,13 @@ describe("the CSV exports", () => {
     expect(parsed.data.map((r) => [r.trial, r["height of the pot above the floor (m)"], r["result (cm)"], r["result (mm)"]])).toEqual([
       ["1", "1", "14.3", ""],
       ["2", "1.5", "", "200"],
+      ["3", "2", "", ""],
     ]);
     expect(Number(parsed.data[0]!["theory (cm)"])).toBeCloseTo(review.trials[0]!.theory!.value, 3);
     expect(Number(parsed.data[1]!["theory (mm)"])).toBeCloseTo(review.trials[1]!.theory!.value, 2);
     expect(parsed.data[0]).toMatchObject({ "answers before the run": "5", "median before the run (cm)": "12", "within 10 % before the run": "1", "answers in the re-vote": "1", explanations: "2" });
     // Totals only: no pupil's name in the results export.
     const text = JSON.stringify(parsed.data);
-    for (const name of ["Ana B.", "Ben C.", "=1+1"]) expect(text).not.toContain(name);
+    for (const name of ["Ana B.", "Ben C.", "=1+1", "Dee F."]) expect(text).not.toContain(name);
   });
 });

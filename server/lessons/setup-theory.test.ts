@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { defaultParams, theoryFor } from "../lessons/lessons.service";
-import { THEORY_LINKS, theoryParams } from "./lesson-plans.service";
+import { defaultParams, theoryFor } from "./lessons.service";
+import { THEORY_LINKS, theoryParams } from "./setup-theory";
 
-describe("the theory a plan shows", () => {
+describe("the theory of a set-up (plans, and trials not yet run)", () => {
   it("is the same on the shortest fountain chain as on the one the lesson will run (any drop, shape, α and β)", () => {
     const cases = [
       { potHeight: 0.5, linkShape: "rod" },
