@@ -198,13 +198,18 @@ export async function openLessons(db: Db, actor: Actor) {
 
 /** Ends a lesson: its code is free again (the unique index covers open lessons only). Ending twice is fine. */
 async function markEnded(db: Db, lessonId: string): Promise<boolean> {
-  const ended = await db
-    .update(lessons)
-    // Pupils cannot join an ended lesson: count them once, for the department overview.
-    .set({ status: "ended", endedAt: new Date(), participantCount: sql`(select count(*) from ${lessonParticipants} where ${lessonParticipants.lessonId} = ${lessonId})` })
-    .where(and(eq(lessons.id, lessonId), eq(lessons.status, "open")))
-    .returning({ id: lessons.id });
-  return ended.length > 0;
+  return db.transaction(async (tx) => {
+    // Lock first, count after: joins in flight hold a share lock, so the count below (a new
+    // statement, so a new snapshot) sees every pupil who got in, and no one gets in later.
+    const open = await tx.execute(sql`select 1 from ${lessons} where ${lessons.id} = ${lessonId} and ${lessons.status} = 'open' for update`);
+    if (open.rows.length === 0) return false;
+    await tx
+      .update(lessons)
+      // Pupils cannot join an ended lesson: count them once, for the department overview.
+      .set({ status: "ended", endedAt: new Date(), participantCount: sql`(select count(*) from ${lessonParticipants} where ${lessonParticipants.lessonId} = ${lessonId})` })
+      .where(eq(lessons.id, lessonId));
+    return true;
+  });
 }
 
 export async function endLessonByActor(db: Db, actor: Actor, lessonId: string) {
@@ -436,11 +441,18 @@ export async function joinLesson(db: Db, input: z.output<typeof joinLessonInputS
 
   const token = randomBytes(24).toString("base64url");
   try {
-    const [row] = await db
-      .insert(lessonParticipants)
-      .values({ lessonId: lesson.id, displayName, rosterEntryId, resumeTokenHash: hashResumeToken(token) })
-      .returning({ id: lessonParticipants.id, displayName: lessonParticipants.displayName });
-    return { session: await pupilSession(db, lesson.id, row!, token), isNew: true };
+    const row = await db.transaction(async (tx) => {
+      // Joined under a share lock on the still-open lesson: ending it waits for this join to be
+      // counted, and a join that waited on an end finds the lesson ended.
+      const open = await tx.execute(sql`select 1 from ${lessons} where ${lessons.id} = ${lesson.id} and ${lessons.status} = 'open' for share`);
+      if (open.rows.length === 0) throw lessonEnded();
+      const [inserted] = await tx
+        .insert(lessonParticipants)
+        .values({ lessonId: lesson.id, displayName, rosterEntryId, resumeTokenHash: hashResumeToken(token) })
+        .returning({ id: lessonParticipants.id, displayName: lessonParticipants.displayName });
+      return inserted!;
+    });
+    return { session: await pupilSession(db, lesson.id, row, token), isNew: true };
   } catch (error) {
     if (isUniqueViolation(error, "lesson_participants_name_key")) {
       throw new AppError("name_taken", "Someone in this lesson already uses that name: add an initial, or ask your teacher.", {
