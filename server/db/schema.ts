@@ -351,6 +351,11 @@ export const predictions = pgTable(
       .references(() => lessonParticipants.id, { onDelete: "cascade" }),
     round: integer("round").$type<1 | 2>().notNull(),
     clientId: uuid("client_id").notNull(),
+    /**
+     * Client ids of the answers this row replaced, so a late resend of one of them is
+     * acknowledged as stored instead of overwriting the newer answer.
+     */
+    replacedClientIds: uuid("replaced_client_ids").array().notNull().default(sql`'{}'::uuid[]`),
     /** In the question's unit, as typed. */
     value: doublePrecision("value"),
     choice: integer("choice"),

@@ -1,5 +1,5 @@
 import { createHash, randomBytes } from "node:crypto";
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, or, sql } from "drizzle-orm";
 import type { z } from "zod";
 import { ParamError, RIGS, parseParams, type RigId } from "../../sim";
 import { recordAudit } from "../audit/audit.repository";
@@ -540,7 +540,15 @@ export async function submitPrediction(
         })
         .onConflictDoUpdate({
           target: [predictions.trialId, predictions.participantId, predictions.round],
-          set: { clientId: input.clientId, value: input.value, choice: input.choice, reason: input.reason, updatedAt: now },
+          set: {
+            clientId: input.clientId,
+            // Remember the answer being replaced (the last 50 are plenty for resends).
+            replacedClientIds: sql`(array_append(${predictions.replacedClientIds}, ${predictions.clientId}))[greatest(cardinality(${predictions.replacedClientIds}) - 48, 1):]`,
+            value: input.value,
+            choice: input.choice,
+            reason: input.reason,
+            updatedAt: now,
+          },
         })
         .returning();
       return saved!;
@@ -557,11 +565,20 @@ export async function submitPrediction(
   }
 }
 
+/**
+ * The stored answer with this client id, or the newer answer that replaced it: a late resend of
+ * a replaced answer is acknowledged (the device is done with it) and changes nothing.
+ */
 async function findStoredPrediction(db: Db, participantId: string, clientId: string): Promise<StoredAnswer | null> {
   const [row] = await db
     .select({ clientId: predictions.clientId, updatedAt: predictions.updatedAt })
     .from(predictions)
-    .where(and(eq(predictions.participantId, participantId), eq(predictions.clientId, clientId)));
+    .where(
+      and(
+        eq(predictions.participantId, participantId),
+        or(eq(predictions.clientId, clientId), sql`${clientId}::uuid = any(${predictions.replacedClientIds})`),
+      ),
+    );
   return row ? { clientId: row.clientId, storedAt: row.updatedAt.toISOString() } : null;
 }
 

@@ -263,6 +263,26 @@ describe("predictions", () => {
     expect(rows.map((r) => [r.participantId, r.clientId, r.value, r.reason])).toEqual([[session.participant.id, second, 15, "Changed my mind."]]);
   });
 
+  it("a late resend of a replaced answer is acknowledged and leaves the newer answer in place", async () => {
+    const { code, trialId, teacher } = await startLesson();
+    const { socket } = await joinAs(pool, code, "Wren A.");
+    await ok(teacher, "trial:phase", { trialId, phase: "predict" });
+    const first = randomUUID();
+    const second = randomUUID();
+    await ok(socket, "prediction:submit", { trialId, round: 1, clientId: first, value: 10 });
+    const newer = await ok<{ clientId: string; storedAt: string }>(socket, "prediction:submit", { trialId, round: 1, clientId: second, value: 15, reason: "Changed my mind." });
+    // The first answer arrives again (a resend from a device that never saw its acknowledgement).
+    const ack = await ok<{ clientId: string; storedAt: string }>(socket, "prediction:submit", { trialId, round: 1, clientId: first, value: 10 });
+    expect(ack).toEqual(newer);
+    const rows = await predictionRows(trialId);
+    expect(rows.map((r) => [r.clientId, r.value, r.reason])).toEqual([[second, 15, "Changed my mind."]]);
+    // A third answer still replaces it; both earlier ids are now remembered.
+    const third = randomUUID();
+    await ok(socket, "prediction:submit", { trialId, round: 1, clientId: third, value: 12 });
+    expect(await ok(socket, "prediction:submit", { trialId, round: 1, clientId: second, value: 15 })).toMatchObject({ clientId: third });
+    expect((await predictionRows(trialId)).map((r) => [r.clientId, r.value])).toEqual([[third, 12]]);
+  });
+
   it("a pupil whose socket drops before the acknowledgement resends with the same clientId after reconnecting: stored once", async () => {
     const { code, trialId, teacher } = await startLesson();
     const { socket, session } = await joinAs(pool, code, "Wren U.");

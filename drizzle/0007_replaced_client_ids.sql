@@ -1,0 +1,1 @@
+ALTER TABLE "predictions" ADD COLUMN "replaced_client_ids" uuid[] DEFAULT '{}'::uuid[] NOT NULL;
