@@ -149,8 +149,10 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
       log,
     }),
   );
+  // One photo store: bench routes save and read photos; the purge and "delete now" remove them.
+  const photos = createPhotoStore(config.uploadsDir);
   const purgeSchedule: PurgeSchedule | null =
-    config.purgeSchedule === null ? null : startPurgeSchedule(db, { pattern: config.purgeSchedule ?? DEFAULT_PURGE_SCHEDULE, log });
+    config.purgeSchedule === null ? null : startPurgeSchedule(db, { pattern: config.purgeSchedule ?? DEFAULT_PURGE_SCHEDULE, photos, log });
 
   const digestSchedule: DigestSchedule | null =
     config.digestSchedule === null
@@ -159,13 +161,13 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
 
   app.use(invitationsRoutes({ db, mailer, publicUrl, log }));
   // Before the classes router: admins may delete a class's pupil data, and its guard would stop them.
-  app.use(retentionRoutes(db, purgeSchedule));
+  app.use(retentionRoutes(db, purgeSchedule, photos));
   app.use(classesRoutes(db));
   app.use(lessonsRoutes(db, lessonLive));
   app.use(plannedLessonsRoutes(db));
   app.use(lessonPlansRoutes(db));
   app.use(lessonReviewRoutes(db));
-  app.use(benchRoutes(db, createPhotoStore(config.uploadsDir)));
+  app.use(benchRoutes(db, photos));
   app.use(departmentRoutes(db));
   app.use(staffRoutes(db, realtime));
   if (config.demo && config.mailDir) app.use(devMailRoutes(config.mailDir));

@@ -37,16 +37,18 @@ export function retentionCutoff(period: RetentionPeriod, now: Date): Date {
 }
 
 /**
- * Kinds of pupil data a purge or a "delete now" removes: roster names, and from live lessons the
- * names pupils joined with, their predictions (with reasons) and their explanations.
+ * Kinds of pupil data a purge or a "delete now" removes: roster names, from live lessons the
+ * names pupils joined with, their predictions (with reasons) and their explanations, and photos
+ * of real runs (they may show pupils).
  */
-export const PUPIL_DATA_KINDS = ["roster_names", "lesson_predictions", "lesson_explanations", "lesson_names"] as const;
+export const PUPIL_DATA_KINDS = ["roster_names", "lesson_predictions", "lesson_explanations", "lesson_names", "run_photos"] as const;
 export type PupilDataKind = (typeof PUPIL_DATA_KINDS)[number];
 export const PUPIL_DATA_KIND_LABELS: Record<PupilDataKind, { one: string; many: string }> = {
   roster_names: { one: "roster name", many: "roster names" },
   lesson_predictions: { one: "lesson prediction", many: "lesson predictions" },
   lesson_explanations: { one: "lesson explanation", many: "lesson explanations" },
   lesson_names: { one: "name used in a lesson", many: "names used in lessons" },
+  run_photos: { one: "photo of a real run", many: "photos of real runs" },
 };
 
 export const deletedCountSchema = z.object({ kind: z.enum(PUPIL_DATA_KINDS), count: z.number().int().min(0) });

@@ -2,7 +2,8 @@ import { desc, eq, sql } from "drizzle-orm";
 import { retentionCutoff, type DeletedCount, type PurgeRun } from "../contracts/retention";
 import type { Db } from "../db/client";
 import { purgeDeletions, purgeRuns, schools } from "../db/schema";
-import { PUPIL_DATA_TARGETS } from "./retention.targets";
+import type { PhotoStore } from "../bench/photo-store";
+import { PUPIL_DATA_TARGETS, removePhotoFiles } from "./retention.targets";
 
 /** Arbitrary constant: only one purge at a time across every Linkleap process on this database. */
 export const PURGE_LOCK_KEY = 7_531_902_419;
@@ -19,13 +20,17 @@ export interface PurgeResult {
 /**
  * Deletes, for every school, the pupil data older than the school's retention period allows,
  * and records the run with a count per school and kind. All or nothing: a failure rolls back
- * every deletion of the run and is recorded as a failed run.
+ * every deletion of the run and is recorded as a failed run. Photo files go after the commit.
  */
-export async function runPurge(db: Db, options: { trigger: PurgeTrigger; now?: Date }): Promise<PurgeResult> {
+export async function runPurge(
+  db: Db,
+  options: { trigger: PurgeTrigger; now?: Date; photos: PhotoStore; log?: (message: string, error?: unknown) => void },
+): Promise<PurgeResult> {
   const now = options.now ?? new Date();
   const startedAt = new Date();
+  const files: string[] = [];
   try {
-    return await db.transaction(async (tx) => {
+    const result = await db.transaction(async (tx): Promise<PurgeResult> => {
       const lock = await tx.execute<{ locked: boolean }>(sql`select pg_try_advisory_xact_lock(${PURGE_LOCK_KEY}) as locked`);
       if (!lock.rows[0]?.locked) return { runId: null, skipped: true, deletions: [] };
 
@@ -38,7 +43,7 @@ export async function runPurge(db: Db, options: { trigger: PurgeTrigger; now?: D
       for (const school of await tx.select({ id: schools.id, retention: schools.pupilDataRetention }).from(schools)) {
         const cutoff = retentionCutoff(school.retention, now);
         for (const target of PUPIL_DATA_TARGETS) {
-          const count = await target.purgeSchool(tx, school.id, cutoff);
+          const count = await target.purgeSchool(tx, school.id, cutoff, files);
           deletions.push({ schoolId: school.id, kind: target.kind, cutoff, count });
           rows.push({ runId: run!.id, schoolId: school.id, kind: target.kind, retention: school.retention, cutoff, deletedCount: count });
         }
@@ -47,6 +52,8 @@ export async function runPurge(db: Db, options: { trigger: PurgeTrigger; now?: D
       await tx.update(purgeRuns).set({ finishedAt: new Date() }).where(eq(purgeRuns.id, run!.id));
       return { runId: run!.id, skipped: false, deletions };
     });
+    await removePhotoFiles(options.photos, files, options.log ?? console.error);
+    return result;
   } catch (error) {
     await db
       .insert(purgeRuns)

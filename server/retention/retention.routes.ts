@@ -1,5 +1,6 @@
 import { Router } from "express";
 import { updateRetentionInputSchema } from "../contracts/retention";
+import type { PhotoStore } from "../bench/photo-store";
 import type { Db } from "../db/client";
 import { actorOf, requireRole, requireStaff } from "../auth/guards";
 import { parseId, parseInput } from "../http/validate";
@@ -11,7 +12,7 @@ import { deleteClassPupilData, getRetentionSettings, listSchoolClasses, updateRe
  *
  * Mounted before the classes router, whose guard would stop admins at `/api/classes`.
  */
-export function retentionRoutes(db: Db, schedule: { nextRunAt(): Date | null } | null) {
+export function retentionRoutes(db: Db, schedule: { nextRunAt(): Date | null } | null, photos: PhotoStore) {
   const router = Router();
 
   router.get("/api/school/retention", requireStaff, async (req, res) => {
@@ -30,7 +31,7 @@ export function retentionRoutes(db: Db, schedule: { nextRunAt(): Date | null } |
   });
 
   router.delete("/api/classes/:classId/pupil-data", requireStaff, async (req, res) => {
-    res.json(await deleteClassPupilData(db, actorOf(req), parseId(req.params.classId, "That class")));
+    res.json(await deleteClassPupilData(db, photos, actorOf(req), parseId(req.params.classId, "That class")));
   });
 
   return router;

@@ -1,4 +1,5 @@
 import { Cron } from "croner";
+import type { PhotoStore } from "../bench/photo-store";
 import type { Db } from "../db/client";
 import { lastSuccessfulPurgeAt, runPurge, type PurgeTrigger } from "./retention.purge";
 
@@ -19,7 +20,7 @@ export interface PurgeSchedule {
  */
 export function startPurgeSchedule(
   db: Db,
-  options: { pattern?: string; catchUp?: boolean; log: (message: string, error?: unknown) => void },
+  options: { pattern?: string; catchUp?: boolean; photos: PhotoStore; log: (message: string, error?: unknown) => void },
 ): PurgeSchedule {
   const inFlight = new Set<Promise<unknown>>();
   const track = <T>(promise: Promise<T>): Promise<T> => {
@@ -29,7 +30,7 @@ export function startPurgeSchedule(
   };
   const run = (trigger: PurgeTrigger): Promise<void> =>
     track(
-      runPurge(db, { trigger })
+      runPurge(db, { trigger, photos: options.photos, log: options.log })
         .then((result) => {
           if (result.skipped) return;
           const total = result.deletions.reduce((sum, d) => sum + d.count, 0);

@@ -1,6 +1,7 @@
 import { asc, eq, sql } from "drizzle-orm";
 import type { PupilDataDeletion, RetentionPeriod, RetentionSettings, SchoolClass } from "../contracts/retention";
 import { isTeachingRole } from "../contracts/staff-roles";
+import type { PhotoStore } from "../bench/photo-store";
 import type { Db } from "../db/client";
 import { classes, rosterEntries, schools, staff } from "../db/schema";
 import { recordAudit } from "../audit/audit.repository";
@@ -9,7 +10,7 @@ import { findClassRow } from "../classes/classes.repository";
 import { forbidden, notFound } from "../http/app-error";
 import type { Actor } from "../staff/staff.repository";
 import { lastPurgeRun } from "./retention.purge";
-import { PUPIL_DATA_TARGETS } from "./retention.targets";
+import { PUPIL_DATA_TARGETS, removePhotoFiles } from "./retention.targets";
 
 export async function getRetentionSettings(db: Db, schoolId: string, nextRunAt: Date | null): Promise<RetentionSettings> {
   const [school] = await db.select({ period: schools.pupilDataRetention }).from(schools).where(eq(schools.id, schoolId));
@@ -72,8 +73,15 @@ export async function listSchoolClasses(db: Db, schoolId: string): Promise<Schoo
 /**
  * Deletes every kind of pupil data one class holds, at once, for its teacher or a school admin.
  * The head of department can see the class but not do this (403); anyone else gets 404.
+ * Photo files are removed once the deletion has committed.
  */
-export async function deleteClassPupilData(db: Db, actor: Actor, classId: string): Promise<PupilDataDeletion> {
+export async function deleteClassPupilData(
+  db: Db,
+  photos: PhotoStore,
+  actor: Actor,
+  classId: string,
+  log: (message: string, error?: unknown) => void = console.error,
+): Promise<PupilDataDeletion> {
   if (actor.role === "admin") {
     if (!(await findClassRow(db, actor.schoolId, classId))) throw notFound("That class");
   } else if (isTeachingRole(actor.role)) {
@@ -81,11 +89,12 @@ export async function deleteClassPupilData(db: Db, actor: Actor, classId: string
   } else {
     throw forbidden();
   }
+  const files: string[] = [];
   const deleted = await db.transaction(async (tx) => {
     // Serialise with roster saves on the same class.
     await tx.execute(sql`select 1 from ${classes} where ${classes.id} = ${classId} for update`);
     const counts = [];
-    for (const target of PUPIL_DATA_TARGETS) counts.push({ kind: target.kind, count: await target.deleteForClass(tx, classId) });
+    for (const target of PUPIL_DATA_TARGETS) counts.push({ kind: target.kind, count: await target.deleteForClass(tx, classId, files) });
     await tx.update(classes).set({ updatedAt: new Date() }).where(eq(classes.id, classId));
     await recordAudit(tx, {
       schoolId: actor.schoolId,
@@ -97,5 +106,6 @@ export async function deleteClassPupilData(db: Db, actor: Actor, classId: string
     });
     return counts;
   });
+  await removePhotoFiles(photos, files, log);
   return { classId, deleted };
 }

@@ -1,7 +1,8 @@
 import { and, eq, inArray, isNotNull, lt } from "drizzle-orm";
 import type { PupilDataKind } from "../contracts/retention";
+import type { PhotoStore } from "../bench/photo-store";
 import type { Db } from "../db/client";
-import { classes, explanations, lessonParticipants, lessons, predictions, rosterEntries, trials } from "../db/schema";
+import { benchPhotos, classes, explanations, lessonParticipants, lessons, predictions, rosterEntries, trials } from "../db/schema";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
@@ -11,13 +12,17 @@ type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
  *
  * Pupil data: roster names, and from live lessons a display name per lesson, predictions with
  * their reasons, and explanations. A lesson's data is on the clock from when the lesson started.
+ * Photos of real runs may show pupils: on the clock from their upload.
+ *
+ * `files` collects the stored names of photo files whose rows went: the caller removes them once
+ * the transaction has committed (a rolled-back deletion keeps its files).
  */
 export interface PupilDataTarget {
   kind: PupilDataKind;
   /** Deletes this school's data of this kind whose clock started before `cutoff`; returns how many rows went. */
-  purgeSchool(tx: Tx, schoolId: string, cutoff: Date): Promise<number>;
+  purgeSchool(tx: Tx, schoolId: string, cutoff: Date, files: string[]): Promise<number>;
   /** Deletes all of one class's data of this kind; returns how many rows went. */
-  deleteForClass(tx: Tx, classId: string): Promise<number>;
+  deleteForClass(tx: Tx, classId: string, files: string[]): Promise<number>;
 }
 
 /**
@@ -85,9 +90,34 @@ const lessonNames = lessonTarget("lesson_names", async (tx, scope) => {
   return deleted.length;
 });
 
+/** The rows go here; their files go after the commit. Runs measured on a photo keep their numbers. */
+const runPhotos: PupilDataTarget = {
+  kind: "run_photos",
+  async purgeSchool(tx, schoolId, cutoff, files) {
+    const schoolClasses = tx.select({ id: classes.id }).from(classes).where(eq(classes.schoolId, schoolId));
+    const deleted = await tx
+      .delete(benchPhotos)
+      .where(and(inArray(benchPhotos.classId, schoolClasses), lt(benchPhotos.createdAt, cutoff)))
+      .returning({ storedName: benchPhotos.storedName });
+    files.push(...deleted.map((d) => d.storedName));
+    return deleted.length;
+  },
+  async deleteForClass(tx, classId, files) {
+    const deleted = await tx.delete(benchPhotos).where(eq(benchPhotos.classId, classId)).returning({ storedName: benchPhotos.storedName });
+    files.push(...deleted.map((d) => d.storedName));
+    return deleted.length;
+  },
+};
+
 export const PUPIL_DATA_TARGETS: readonly PupilDataTarget[] = [
   rosterNamesOfArchivedClasses,
   lessonPredictions,
   lessonExplanations,
   lessonNames,
+  runPhotos,
 ];
+
+/** Removes the files of deleted photo rows; a file that will not go is logged, not fatal (its row is gone). */
+export async function removePhotoFiles(store: PhotoStore, names: readonly string[], log: (message: string, error?: unknown) => void): Promise<void> {
+  for (const name of names) await store.remove(name).catch((error) => log(`[pupil data] could not remove photo file ${name}`, error));
+}

@@ -1,14 +1,20 @@
 /**
  * Live lessons' pupil data (names pupils joined with, predictions with reasons, explanations)
  * goes with the retention purge once its lesson started before the school's cutoff, and at once
- * with "delete this class's pupil data now".
+ * with "delete this class's pupil data now". So do photos of real runs (they may show pupils):
+ * rows and files, while the runs measured on them keep their numbers.
  */
 import { randomUUID } from "node:crypto";
+import { existsSync, readdirSync } from "node:fs";
+import { join } from "node:path";
 import { eq, inArray } from "drizzle-orm";
+import { PNG } from "pngjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { BenchPhoto, BenchRun } from "../../server/contracts/bench";
 import type { PupilDataDeletion } from "../../server/contracts/retention";
 import type { TeacherLesson } from "../../server/contracts/lessons";
-import { explanations, lessonParticipants, lessons, predictions, trials } from "../../server/db/schema";
+import { benchPhotos, explanations, lessonParticipants, lessons, predictions, trials } from "../../server/db/schema";
+import { createPhotoStore } from "../../server/bench/photo-store";
 import { runPurge } from "../../server/retention/retention.purge";
 import { PEOPLE, seedFixture } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
@@ -58,13 +64,14 @@ describe("live lessons' pupil data and retention", () => {
     // The old lesson was a year ago; the school keeps data until the end of the school year.
     await ctx.database.db.update(lessons).set({ startedAt: new Date(Date.now() - 400 * 24 * 60 * 60 * 1000) }).where(eq(lessons.id, old));
 
-    const result = await runPurge(ctx.database.db, { trigger: "manual" });
+    const result = await runPurge(ctx.database.db, { trigger: "manual", photos: createPhotoStore(ctx.stack.uploadsDir) });
     const mine = result.deletions.filter((d) => d.schoolId === ctx.fixture.schoolId);
     expect(Object.fromEntries(mine.map((d) => [d.kind, d.count]))).toEqual({
       roster_names: 0,
       lesson_predictions: 2,
       lesson_explanations: 2,
       lesson_names: 2,
+      run_photos: 0,
     });
     expect(await countsFor(old)).toEqual({ names: 0, predictions: 0, explanations: 0 });
     expect(await countsFor(recent)).toEqual({ names: 2, predictions: 2, explanations: 2 });
@@ -82,7 +89,58 @@ describe("live lessons' pupil data and retention", () => {
       { kind: "lesson_predictions", count: 4 },
       { kind: "lesson_explanations", count: 4 },
       { kind: "lesson_names", count: 4 },
+      { kind: "run_photos", count: 0 },
     ]);
     expect(await countsFor(lessonId)).toEqual({ names: 0, predictions: 0, explanations: 0 });
+  });
+});
+
+const photosPath = () => `/api/classes/${ctx.fixture.classA}/bench-photos`;
+async function uploadPhoto(): Promise<BenchPhoto> {
+  const png = new PNG({ width: 40, height: 30 });
+  png.data.fill(180);
+  const form = new FormData();
+  form.append("photo", new Blob([new Uint8Array(PNG.sync.write(png))], { type: "image/png" }), "run.png");
+  const res = await teacherA.request(photosPath(), { method: "POST", body: form });
+  expect(res.status).toBe(201);
+  return (await res.json()) as BenchPhoto;
+}
+const storedNameOf = async (photoId: string) =>
+  (await ctx.database.db.select({ storedName: benchPhotos.storedName }).from(benchPhotos).where(eq(benchPhotos.id, photoId)))[0]?.storedName;
+const fileExists = (name: string) => existsSync(join(ctx.stack.uploadsDir, name));
+
+describe("photos of real runs and retention", () => {
+  it("the purge deletes photos uploaded before the cutoff, rows and files, and keeps newer ones and the runs' numbers", async () => {
+    const old = await uploadPhoto();
+    const recent = await uploadPhoto();
+    const oldFile = (await storedNameOf(old.id))!;
+    const recentFile = (await storedNameOf(recent.id))!;
+    expect([fileExists(oldFile), fileExists(recentFile)]).toEqual([true, true]);
+    // A run measured on the old photo (0.5 m over 200 px; rim 400 px above the floor = 1 m; crest 56 px above = 0.14 m).
+    const marks = { rim: { x: 10, y: 500 }, crest: { x: 12, y: 444 }, floor: { x: 10, y: 900 }, referenceStart: { x: 100, y: 700 }, referenceEnd: { x: 220, y: 860 } };
+    const run = await teacherA.json<BenchRun>(`${photosPath()}/${old.id}/measurements`, { method: "POST", json: { marks, referenceLength: 50, referenceUnit: "cm" } });
+    expect(run.status).toBe(201);
+    await ctx.database.db.update(benchPhotos).set({ createdAt: new Date(Date.now() - 400 * 24 * 60 * 60 * 1000) }).where(eq(benchPhotos.id, old.id));
+
+    const result = await runPurge(ctx.database.db, { trigger: "manual", photos: createPhotoStore(ctx.stack.uploadsDir) });
+    expect(result.deletions.find((d) => d.schoolId === ctx.fixture.schoolId && d.kind === "run_photos")?.count).toBe(1);
+    expect(await storedNameOf(old.id)).toBeUndefined();
+    expect(fileExists(oldFile)).toBe(false);
+    expect(await storedNameOf(recent.id)).toBe(recentFile);
+    expect(fileExists(recentFile)).toBe(true);
+    const runs = (await teacherA.json<BenchRun[]>(`/api/classes/${ctx.fixture.classA}/bench-runs`)).body;
+    expect(runs.find((r) => r.id === run.body.id)).toMatchObject({ photoId: null, potHeightM: 1, riseM: 0.14 });
+  });
+
+  it("deleting a class's pupil data now takes every photo of the class, rows and files", async () => {
+    const another = await uploadPhoto();
+    const names = (await ctx.database.db.select({ storedName: benchPhotos.storedName }).from(benchPhotos).where(eq(benchPhotos.classId, ctx.fixture.classA))).map((r) => r.storedName);
+    expect(names).toHaveLength(2); // the recent one from the test before, and this one
+    const { status, body } = await teacherA.json<PupilDataDeletion>(`/api/classes/${ctx.fixture.classA}/pupil-data`, { method: "DELETE" });
+    expect(status).toBe(200);
+    expect(body.deleted.find((d) => d.kind === "run_photos")).toEqual({ kind: "run_photos", count: 2 });
+    expect(names.filter(fileExists)).toEqual([]);
+    expect(readdirSync(ctx.stack.uploadsDir)).toEqual([]);
+    expect((await teacherA.request(another.url)).status).toBe(404);
   });
 });

@@ -9,6 +9,7 @@ import type { ApiErrorBody } from "../../server/contracts/errors";
 import { PUPIL_DATA_KINDS, type PupilDataDeletion, type RetentionSettings } from "../../server/contracts/retention";
 import type { Db } from "../../server/db/client";
 import { auditEvents, classes, purgeDeletions, purgeRuns, rosterEntries, schools } from "../../server/db/schema";
+import { createPhotoStore } from "../../server/bench/photo-store";
 import { PURGE_LOCK_KEY, runPurge } from "../../server/retention/retention.purge";
 import { PEOPLE, seedFixture, type Fixture } from "../support/fixtures";
 import { HttpAgent, signIn } from "../support/http-agent";
@@ -82,7 +83,7 @@ describe("the retention purge", () => {
     const before = await rosterCounts();
     expect(before).toEqual({ current: 3, archived120: 3, archived60: 2, archivedLastYear: 4, otherSchool120: 1 });
 
-    const result = await runPurge(ctx.database.db, { trigger: "manual", now: NOW });
+    const result = await runPurge(ctx.database.db, { trigger: "manual", now: NOW, photos: createPhotoStore(ctx.stack.uploadsDir) });
     expect(result.skipped).toBe(false);
 
     expect(await rosterCounts()).toEqual({ ...before, archivedLastYear: 0 });
@@ -114,12 +115,12 @@ describe("the retention purge", () => {
     const [audit] = await ctx.database.db.select().from(auditEvents).where(eq(auditEvents.action, "school.retention_changed"));
     expect(audit).toMatchObject({ actorStaffId: ctx.fixture.staffIds.admin, detail: { from: "end_of_school_year", to: "days_90" } });
 
-    const result = await runPurge(ctx.database.db, { trigger: "manual", now: NOW });
+    const result = await runPurge(ctx.database.db, { trigger: "manual", now: NOW, photos: createPhotoStore(ctx.stack.uploadsDir) });
     expect(await rosterCounts()).toEqual({ current: 3, archived120: 0, archived60: 2, archivedLastYear: 0, otherSchool120: 1 });
     expect(result.deletions.find((d) => d.schoolId === ctx.fixture.schoolId)?.count).toBe(3);
 
     // A second run finds nothing more to delete, and says so.
-    const again = await runPurge(ctx.database.db, { trigger: "manual", now: NOW });
+    const again = await runPurge(ctx.database.db, { trigger: "manual", now: NOW, photos: createPhotoStore(ctx.stack.uploadsDir) });
     expect(again.deletions.reduce((n, d) => n + d.count, 0)).toBe(0);
   });
 
@@ -135,14 +136,14 @@ describe("the retention purge", () => {
     try {
       await other.query("begin");
       await other.query("select pg_advisory_xact_lock($1)", [PURGE_LOCK_KEY]);
-      const blocked = await runPurge(ctx.database.db, { trigger: "manual", now: NOW });
+      const blocked = await runPurge(ctx.database.db, { trigger: "manual", now: NOW, photos: createPhotoStore(ctx.stack.uploadsDir) });
       expect(blocked).toEqual({ runId: null, skipped: true, deletions: [] });
       expect((await ctx.database.db.select().from(purgeRuns)).length).toBe(runsBefore);
     } finally {
       await other.query("rollback");
       other.release();
     }
-    expect((await runPurge(ctx.database.db, { trigger: "manual", now: NOW })).skipped).toBe(false);
+    expect((await runPurge(ctx.database.db, { trigger: "manual", now: NOW, photos: createPhotoStore(ctx.stack.uploadsDir) })).skipped).toBe(false);
   });
 });
 

@@ -62,8 +62,9 @@ export function DeletePupilDataButton({ classId, className, rosterCount, onDelet
         error={mutation.error}
       >
         <p>
-          This deletes the class’s roster ({rosterCount} {rosterCount === 1 ? "name" : "names"}) straight away. It cannot be
-          undone. The class itself, its name and its settings stay.
+          This deletes, straight away, the class’s roster ({rosterCount} {rosterCount === 1 ? "name" : "names"}), the names,
+          predictions, reasons and explanations from all its lessons, and its photos of real runs. It cannot be undone. The
+          class itself, its settings, its lessons’ set-ups and results, and the numbers measured on photos stay.
         </p>
         <p className="text-ink-muted">The deletion is written to the school’s audit log, without any pupil names.</p>
       </ConfirmDialog>

@@ -32,7 +32,8 @@ export function PrivacyStatement() {
             <strong>Photos of real chain runs</strong>, uploaded by a class’s teacher to measure a run. They should show the
             apparatus, not pupils’ faces, but a photo may show people. Only the class’s teacher and the head of its department
             can see them; the teacher can delete a photo at any time, and its file is removed from the server at once (the
-            measurements taken from it stay). Bench data itself (pot heights, rises, speeds, notes) holds nothing about pupils.
+            measurements taken from it stay). Photos count as pupil data, so they also go with the nightly deletion and with
+            “Delete pupil data now”. Bench data itself (pot heights, rises, speeds, notes) holds nothing about pupils.
           </li>
           <li>
             <strong>In live lessons</strong>: a display name for each lesson, typed by the pupil or picked from the roster; each
@@ -94,9 +95,10 @@ export function PrivacyStatement() {
             </p>
             <p>
               A deletion job runs every night. It deletes pupils’ lesson names, predictions, reasons and explanations once that
-              long has passed since their lesson started, and the roster names of classes that have been archived for longer
-              than that: a class still in use keeps its roster. The lessons themselves stay, with their set-ups and simulated
-              results, but without anything about a pupil.
+              long has passed since their lesson started, photos of real runs once that long has passed since they were
+              uploaded, and the roster names of classes that have been archived for longer than that: a class still in use keeps
+              its roster. The lessons themselves stay, with their set-ups and simulated results, and so do the numbers measured
+              on photos, but without anything about a pupil.
             </p>
             <p>
               {retention.data.lastRun
