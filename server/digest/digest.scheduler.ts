@@ -18,7 +18,7 @@ export function startDigestSchedule(
   let running: Promise<unknown> | null = null;
   const cron = new Cron(options.pattern ?? DEFAULT_DIGEST_SCHEDULE, { protect: true }, () => {
     running = sendWeeklyDigests(db, { mailer: options.mailer, publicUrl: options.publicUrl, log: options.log })
-      .then((r) => options.log(`[digest] sent ${r.sent}, already sent ${r.skipped}, failed ${r.failed}`))
+      .then((r) => options.log(`[digest] sent ${r.sent}, quiet week ${r.quiet}, already done ${r.skipped}, failed ${r.failed}`))
       .catch((error) => options.log("[digest] run failed", error));
   });
   return {

@@ -48,14 +48,17 @@ export async function departmentWeek(db: Db, departmentId: string, start: Date, 
 
 export interface DigestRunResult {
   sent: number;
+  /** Already sent (or found quiet) for this week by an earlier run. */
   skipped: number;
   failed: number;
+  /** Heads whose department ran no lessons that week: no mail (holidays would otherwise fill inboxes). */
+  quiet: number;
 }
 
 /**
  * Sends last week's digest to every head of department who has not had it yet. The row in
  * weekly_digest_sends is claimed first and released if the mail server refuses the message, so
- * a later run tries again and nobody gets two.
+ * a later run tries again and nobody gets two. A week without lessons is claimed but not mailed.
  */
 export async function sendWeeklyDigests(
   db: Db,
@@ -76,7 +79,7 @@ export async function sendWeeklyDigests(
     .innerJoin(schools, eq(schools.id, staff.schoolId))
     .where(and(eq(staff.role, "head_of_department"), isNull(staff.removedAt)));
 
-  const result: DigestRunResult = { sent: 0, skipped: 0, failed: 0 };
+  const result: DigestRunResult = { sent: 0, skipped: 0, failed: 0, quiet: 0 };
   for (const head of heads) {
     const claimed = await db
       .insert(weeklyDigestSends)
@@ -89,6 +92,10 @@ export async function sendWeeklyDigests(
     }
     try {
       const rows = await departmentWeek(db, head.departmentId!, start, end);
+      if (rows.length === 0) {
+        result.quiet++;
+        continue;
+      }
       await deps.mailer.send(
         weeklyDigestMail({
           to: head.email,
