@@ -29,6 +29,7 @@ import type { Mailer } from "./mail/mailer";
 import { createRealtime, type IoServer, type Realtime } from "./realtime/realtime";
 import { retentionRoutes } from "./retention/retention.routes";
 import { DEFAULT_PURGE_SCHEDULE, startPurgeSchedule, type PurgeSchedule } from "./retention/retention.scheduler";
+import { schoolRoutes } from "./school/school.routes";
 import { staffRoutes } from "./staff/staff.routes";
 import { DEFAULT_DIGEST_SCHEDULE, startDigestSchedule, type DigestSchedule } from "./digest/digest.scheduler";
 
@@ -162,6 +163,7 @@ export function createApp({ config, database, mailer, log = defaultLog }: AppDep
   app.use(invitationsRoutes({ db, mailer, publicUrl, log }));
   // Before the classes router: admins may delete a class's pupil data, and its guard would stop them.
   app.use(retentionRoutes(db, purgeSchedule, photos));
+  app.use(schoolRoutes(db));
   app.use(classesRoutes(db));
   app.use(lessonsRoutes(db, lessonLive));
   app.use(plannedLessonsRoutes(db));

@@ -15,7 +15,7 @@ export function toMe(actor: Actor): Me {
     displayName: actor.displayName,
     email: actor.email,
     role: actor.role,
-    school: { id: actor.schoolId, name: actor.schoolName },
+    school: { id: actor.schoolId, name: actor.schoolName, timeZone: actor.schoolTimeZone },
     department:
       actor.departmentId && actor.departmentName ? { id: actor.departmentId, name: actor.departmentName } : null,
   };

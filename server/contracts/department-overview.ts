@@ -2,10 +2,9 @@ import { z } from "zod";
 
 /**
  * The head of department's overview: totals only, for the department's lessons in a date range.
- * Weeks start on Monday and days are UTC days: the project keeps no school time zone yet, so a
- * lesson at 00:30 on a Monday in a school east of UTC counts in the week before.
+ * Days are the school's (its time zone) and weeks start on Monday. Days here are plain calendar
+ * days ("2026-11-30"); the helpers below do calendar arithmetic on them at UTC midnight.
  */
-export const OVERVIEW_TIME_ZONE = "UTC";
 /** The longest range one request may ask for (two school years and a bit). */
 export const OVERVIEW_MAX_DAYS = 731;
 /** With no range given: the current week and the 11 before it. */
@@ -98,7 +97,8 @@ export interface WeeklyCloseness {
 export interface DepartmentOverview {
   from: string;
   to: string;
-  timeZone: typeof OVERVIEW_TIME_ZONE;
+  /** The school's time zone (IANA), in which days and weeks are counted. */
+  timeZone: string;
   /** Mondays of the weeks shown, oldest first; every `perWeek` array follows this order. */
   weeks: string[];
   totals: OverviewTotals;

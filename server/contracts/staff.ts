@@ -8,7 +8,7 @@ export const meSchema = z.object({
   displayName: z.string(),
   email: z.string(),
   role: staffRoleSchema,
-  school: z.object({ id: z.uuid(), name: z.string() }),
+  school: z.object({ id: z.uuid(), name: z.string(), timeZone: z.string() }),
   department: z.object({ id: z.uuid(), name: z.string() }).nullable(),
 });
 export type Me = z.infer<typeof meSchema>;

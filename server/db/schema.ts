@@ -20,6 +20,7 @@ import {
 } from "drizzle-orm/pg-core";
 import type { PupilDataKind } from "../contracts/retention";
 import { DEFAULT_RETENTION, RETENTION_PERIODS } from "../contracts/retention";
+import { DEFAULT_SCHOOL_TIME_ZONE } from "../contracts/school";
 import { STAFF_ROLES } from "../contracts/staff-roles";
 import type { BenchSource, HeightUnit, PhotoMediaType } from "../contracts/bench";
 import type { PhotoMarks } from "../contracts/photo-measure";
@@ -36,6 +37,8 @@ export const schools = pgTable("schools", {
   name: text("name").notNull(),
   /** How long pupil data is kept before the scheduled purge deletes it. */
   pupilDataRetention: retentionPeriod("pupil_data_retention").notNull().default(DEFAULT_RETENTION),
+  /** IANA name; the overview's weeks and the weekly digest count days in it. */
+  timeZone: text("time_zone").notNull().default(DEFAULT_SCHOOL_TIME_ZONE),
   createdAt: createdAt(),
 });
 

@@ -3,12 +3,27 @@ import type { Db } from "../db/client";
 
 type Reader = Pick<Db, "execute">;
 
-/** The department's lessons started in [start, end): the week each falls in (Monday, UTC), teacher and class. */
-const lessonsInRange = (departmentId: string, start: Date, end: Date): SQL => sql`
-  select l.id, l.teacher_id, l.class_id, l.participant_count, date_trunc('week', l.started_at at time zone 'UTC')::date as week
+/**
+ * The school's days: `from` and `to` are calendar days (ISO) in `timeZone`, the range ends before
+ * midnight starting `to`, and weeks start on Monday there. The bounds are constants, so the
+ * started_at index still serves the range.
+ */
+export interface OverviewScope {
+  departmentId: string;
+  timeZone: string;
+  from: string;
+  /** The day after the last one shown. */
+  to: string;
+}
+
+/** The department's lessons started in the range: the week each falls in (Monday, school time), teacher and class. */
+const lessonsInRange = ({ departmentId, timeZone, from, to }: OverviewScope): SQL => sql`
+  select l.id, l.teacher_id, l.class_id, l.participant_count, date_trunc('week', l.started_at at time zone ${timeZone})::date as week
   from lessons l
   join classes c on c.id = l.class_id
-  where c.department_id = ${departmentId} and l.started_at >= ${start.toISOString()} and l.started_at < ${end.toISOString()}`;
+  where c.department_id = ${departmentId}
+    and l.started_at >= (${from}::timestamp at time zone ${timeZone})
+    and l.started_at < (${to}::timestamp at time zone ${timeZone})`;
 
 export interface LessonCellRow {
   week: string;
@@ -22,9 +37,9 @@ export interface LessonCellRow {
 }
 
 /** Lessons, trials run and pupils taking part per week × teacher × class. */
-export async function lessonCells(db: Reader, departmentId: string, start: Date, end: Date): Promise<LessonCellRow[]> {
+export async function lessonCells(db: Reader, scope: OverviewScope): Promise<LessonCellRow[]> {
   const result = await db.execute(sql`
-    with l as (${lessonsInRange(departmentId, start, end)})
+    with l as (${lessonsInRange(scope)})
     select to_char(l.week, 'YYYY-MM-DD') as "week", l.teacher_id as "teacherId", s.display_name as "teacherName",
       l.class_id as "classId", c.name as "className", count(*)::int as "lessons",
       coalesce(sum(tr.runs), 0)::int as "trialsRun", coalesce(sum(pp.n), 0)::int as "pupils"
@@ -58,9 +73,9 @@ export interface ClosenessRow {
  * and per week (the median over trials cannot be added up from the finer rows, so Postgres
  * works out both in one pass with grouping sets).
  */
-export async function closenessRows(db: Reader, departmentId: string, start: Date, end: Date): Promise<ClosenessRow[]> {
+export async function closenessRows(db: Reader, scope: OverviewScope): Promise<ClosenessRow[]> {
   const result = await db.execute(sql`
-    with l as (${lessonsInRange(departmentId, start, end)})
+    with l as (${lessonsInRange(scope)})
     select to_char(l.week, 'YYYY-MM-DD') as "week", l.teacher_id as "teacherId", l.class_id as "classId",
       count(*)::int as "trialsCompared", sum(t.summary_predictions)::int as "predictions", sum(t.summary_within10)::int as "within10",
       percentile_cont(0.5) within group (order by t.summary_median_rel_error) as "medianRelError"
@@ -72,9 +87,9 @@ export async function closenessRows(db: Reader, departmentId: string, start: Dat
 }
 
 /** Trials run per rig. */
-export async function trialsByRig(db: Reader, departmentId: string, start: Date, end: Date): Promise<{ rig: string; trialsRun: number }[]> {
+export async function trialsByRig(db: Reader, scope: OverviewScope): Promise<{ rig: string; trialsRun: number }[]> {
   const result = await db.execute(sql`
-    with l as (${lessonsInRange(departmentId, start, end)})
+    with l as (${lessonsInRange(scope)})
     select t.rig as "rig", count(*)::int as "trialsRun"
     from l
     join trials t on t.lesson_id = l.id

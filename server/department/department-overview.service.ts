@@ -1,9 +1,6 @@
 import {
-  OVERVIEW_TIME_ZONE,
   addDays,
   defaultOverviewRange,
-  isoDay,
-  parseIsoDay,
   weeksOverlapping,
   type DepartmentOverview,
   type WeeklyCloseness,
@@ -11,15 +8,16 @@ import {
   overviewQuerySchema,
 } from "../contracts/department-overview";
 import type { z } from "zod";
+import { isoDayIn } from "../contracts/school";
 import type { Db } from "../db/client";
 import { toCsv } from "../http/csv";
 import { closenessRows, lessonCells, trialsByRig, type ClosenessRow, type LessonCellRow } from "./department-overview.repository";
 
 type Query = z.output<typeof overviewQuerySchema>;
 
-/** The range asked for, with the defaults filled in: a missing end is today, a missing start 12 weeks back. */
-export function resolveRange(query: Query, now: Date = new Date()): { from: string; to: string } {
-  const today = isoDay(now);
+/** The range asked for, with the defaults filled in: a missing end is today (the school's day), a missing start 12 weeks back. */
+export function resolveRange(query: Query, timeZone: string, now: Date = new Date()): { from: string; to: string } {
+  const today = isoDayIn(now, timeZone);
   const to = query.to ?? (query.from && query.from > today ? query.from : today);
   const from = query.from ?? defaultOverviewRange(to).from;
   return { from, to };
@@ -34,16 +32,17 @@ interface Loaded {
   rigs: { rig: string; trialsRun: number }[];
 }
 
-async function load(db: Db, departmentId: string, query: Query, now?: Date): Promise<Loaded> {
-  const { from, to } = resolveRange(query, now);
-  const start = parseIsoDay(from)!;
-  const end = parseIsoDay(addDays(to, 1))!;
+/** Whose lessons, and in which school's days. */
+export interface OverviewOf {
+  departmentId: string;
+  timeZone: string;
+}
+
+async function load(db: Db, of: OverviewOf, query: Query, now?: Date): Promise<Loaded> {
+  const { from, to } = resolveRange(query, of.timeZone, now);
+  const scope = { ...of, from, to: addDays(to, 1) };
   // Three small aggregate queries side by side on the pool.
-  const [cells, closeness, rigs] = await Promise.all([
-    lessonCells(db, departmentId, start, end),
-    closenessRows(db, departmentId, start, end),
-    trialsByRig(db, departmentId, start, end),
-  ]);
+  const [cells, closeness, rigs] = await Promise.all([lessonCells(db, scope), closenessRows(db, scope), trialsByRig(db, scope)]);
   return { from, to, weeks: weeksOverlapping(from, to), cells, closeness, rigs };
 }
 
@@ -61,8 +60,8 @@ function series(weeks: string[], cells: LessonCellRow[], key: (c: LessonCellRow)
 }
 
 /** The overview for one department (totals only: no pupil names, answers or ids). */
-export async function departmentOverview(db: Db, departmentId: string, query: Query, now?: Date): Promise<DepartmentOverview> {
-  const { from, to, weeks, cells, closeness, rigs } = await load(db, departmentId, query, now);
+export async function departmentOverview(db: Db, of: OverviewOf, query: Query, now?: Date): Promise<DepartmentOverview> {
+  const { from, to, weeks, cells, closeness, rigs } = await load(db, of, query, now);
   const index = new Map(weeks.map((w, i) => [w, i]));
   const pupilsPerWeek = weeks.map(() => 0);
   for (const cell of cells) pupilsPerWeek[index.get(cell.week)!]! += cell.pupils;
@@ -85,7 +84,7 @@ export async function departmentOverview(db: Db, departmentId: string, query: Qu
   return {
     from,
     to,
-    timeZone: OVERVIEW_TIME_ZONE,
+    timeZone: of.timeZone,
     weeks,
     totals: {
       lessons: cells.reduce((n, c) => n + c.lessons, 0),
@@ -102,8 +101,8 @@ export async function departmentOverview(db: Db, departmentId: string, query: Qu
   };
 }
 
-export const OVERVIEW_CSV_HEADER = [
-  "Week starting (Monday, UTC)",
+export const overviewCsvHeader = (timeZone: string) => [
+  `Week starting (Monday, ${timeZone})`,
   "Teacher",
   "Class",
   "Lessons",
@@ -112,13 +111,13 @@ export const OVERVIEW_CSV_HEADER = [
   "Round-1 number predictions compared",
   "Within 10 % of result (%)",
   "Median relative error (%)",
-] as const;
+];
 
 const percent = (value: number | null) => (value === null ? "" : (value * 100).toFixed(1));
 
 /** The overview as CSV: one row per week × teacher × class with lessons, totals only. */
-export async function departmentOverviewCsv(db: Db, departmentId: string, query: Query, now?: Date): Promise<{ from: string; to: string; csv: string }> {
-  const { from, to, cells, closeness } = await load(db, departmentId, query, now);
+export async function departmentOverviewCsv(db: Db, of: OverviewOf, query: Query, now?: Date): Promise<{ from: string; to: string; csv: string }> {
+  const { from, to, cells, closeness } = await load(db, of, query, now);
   const fine = new Map(closeness.filter((r) => r.teacherId !== null).map((r) => [`${r.week}|${r.teacherId}|${r.classId}`, r]));
   const rows = cells.map((cell) => {
     const c = fine.get(`${cell.week}|${cell.teacherId}|${cell.classId}`);
@@ -134,6 +133,6 @@ export async function departmentOverviewCsv(db: Db, departmentId: string, query:
       percent(c?.medianRelError ?? null),
     ];
   });
-  const csv = toCsv([...OVERVIEW_CSV_HEADER], rows);
+  const csv = toCsv(overviewCsvHeader(of.timeZone), rows);
   return { from, to, csv };
 }

@@ -3,15 +3,15 @@ import { weeklyDigestMail } from "./digest.mail";
 import { reportedWeek } from "./digest.service";
 
 describe("weekly digest", () => {
-  it("reports the whole previous week, Monday to Monday (UTC)", () => {
+  it("reports the whole previous week, Monday to Monday, in the school's days", () => {
     // 2026-12-02 is a Wednesday.
-    const { start, end } = reportedWeek(new Date("2026-12-02T10:00:00Z"));
-    expect(start.toISOString()).toBe("2026-11-23T00:00:00.000Z");
-    expect(end.toISOString()).toBe("2026-11-30T00:00:00.000Z");
+    expect(reportedWeek(new Date("2026-12-02T10:00:00Z"), "Europe/London")).toEqual({ startDay: "2026-11-23", endDay: "2026-11-30" });
     // On a Monday morning it is the week that just ended.
-    expect(reportedWeek(new Date("2026-11-30T07:00:00Z")).start.toISOString()).toBe("2026-11-23T00:00:00.000Z");
+    expect(reportedWeek(new Date("2026-11-30T07:00:00Z"), "Europe/London").startDay).toBe("2026-11-23");
     // On a Sunday, the week before the current one.
-    expect(reportedWeek(new Date("2026-11-29T23:00:00Z")).start.toISOString()).toBe("2026-11-16T00:00:00.000Z");
+    expect(reportedWeek(new Date("2026-11-29T23:00:00Z"), "Europe/London").startDay).toBe("2026-11-16");
+    // Sunday 23:30 UTC is already Monday morning in New Zealand (UTC+13 in November; IANA tz database).
+    expect(reportedWeek(new Date("2026-11-29T23:30:00Z"), "Pacific/Auckland").startDay).toBe("2026-11-23");
   });
 
   it("adds up lessons, trials and pupils per teacher and class", () => {
@@ -20,7 +20,7 @@ describe("weekly digest", () => {
       headName: "Mx Head",
       departmentName: "Science",
       schoolName: "Example School",
-      weekStart: new Date("2026-11-23T00:00:00Z"),
+      weekStart: "2026-11-23",
       rows: [
         { teacherName: "T One", className: "10P", lessons: 2, trialsRun: 5, pupils: 50 },
         { teacherName: "T Two", className: "12A", lessons: 1, trialsRun: 1, pupils: 1 },
@@ -38,7 +38,7 @@ describe("weekly digest", () => {
       headName: "H",
       departmentName: "Science",
       schoolName: "S",
-      weekStart: new Date("2026-11-23T00:00:00Z"),
+      weekStart: "2026-11-23",
       rows: [],
       overviewUrl: "https://x.example/department",
     });

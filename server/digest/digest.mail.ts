@@ -1,3 +1,4 @@
+import { parseIsoDay } from "../contracts/department-overview";
 import type { OutgoingMail } from "../mail/mailer";
 import { escapeHtml, simpleHtmlMail } from "../mail/html";
 
@@ -15,14 +16,15 @@ export interface DigestDetails {
   headName: string;
   departmentName: string;
   schoolName: string;
-  /** Monday 00:00 UTC of the week reported. */
-  weekStart: Date;
+  /** The Monday the week reported starts on, a calendar day in the school's time zone ("2026-11-23"). */
+  weekStart: string;
   rows: DigestRow[];
   overviewUrl: string;
 }
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
-const formatDay = (date: Date) => date.toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+// A calendar day, so formatted at its own UTC midnight.
+const formatDay = (day: string) => parseIsoDay(day)!.toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
 
 /**
  * The head of department's weekly digest: lessons per teacher and class, trials run and pupils

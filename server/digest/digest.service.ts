@@ -2,16 +2,23 @@ import { and, eq, gte, isNull, lt, sql } from "drizzle-orm";
 import type { Db } from "../db/client";
 import { classes, departments, lessonParticipants, lessons, schools, staff, trials, weeklyDigestSends } from "../db/schema";
 import type { Mailer } from "../mail/mailer";
+import { addDays, mondayOf } from "../contracts/department-overview";
+import { isoDayIn } from "../contracts/school";
 import { weeklyDigestMail, type DigestRow } from "./digest.mail";
 
-const DAY_MS = 24 * 60 * 60 * 1000;
+/** The week before the one `now` falls in, Monday to Monday, as calendar days in the school's time zone. */
+export function reportedWeek(now: Date, timeZone: string): { startDay: string; endDay: string } {
+  const thisMonday = mondayOf(isoDayIn(now, timeZone));
+  return { startDay: addDays(thisMonday, -7), endDay: thisMonday };
+}
 
-/** Monday 00:00 UTC of the week before the one `now` falls in: the week a digest reports. */
-export function reportedWeek(now: Date): { start: Date; end: Date } {
-  const midnight = Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate());
-  const daysSinceMonday = (new Date(midnight).getUTCDay() + 6) % 7;
-  const thisMonday = midnight - daysSinceMonday * DAY_MS;
-  return { start: new Date(thisMonday - 7 * DAY_MS), end: new Date(thisMonday) };
+/** The instants the school's days start at (Postgres's tz database, as the overview uses). */
+async function midnightsIn(db: Db, timeZone: string, startDay: string, endDay: string): Promise<{ start: Date; end: Date }> {
+  // As epoch milliseconds: raw rows carry timestamps as text.
+  const ms = (day: string) => sql`(extract(epoch from (${day}::timestamp at time zone ${timeZone})) * 1000)::float8`;
+  const result = await db.execute<{ start: number; end: number }>(sql`select ${ms(startDay)} as "start", ${ms(endDay)} as "end"`);
+  const row = result.rows[0]!;
+  return { start: new Date(row.start), end: new Date(row.end) };
 }
 
 /** Lessons in one department in [start, end), per teacher and class: counts only, never pupils. */
@@ -64,7 +71,7 @@ export async function sendWeeklyDigests(
   db: Db,
   deps: { mailer: Pick<Mailer, "send">; publicUrl: string; now?: Date; log?: (message: string, error?: unknown) => void },
 ): Promise<DigestRunResult> {
-  const { start, end } = reportedWeek(deps.now ?? new Date());
+  const now = deps.now ?? new Date();
   const heads = await db
     .select({
       id: staff.id,
@@ -73,6 +80,7 @@ export async function sendWeeklyDigests(
       departmentId: staff.departmentId,
       departmentName: departments.name,
       schoolName: schools.name,
+      timeZone: schools.timeZone,
     })
     .from(staff)
     .innerJoin(departments, eq(departments.id, staff.departmentId))
@@ -81,6 +89,8 @@ export async function sendWeeklyDigests(
 
   const result: DigestRunResult = { sent: 0, skipped: 0, failed: 0, quiet: 0 };
   for (const head of heads) {
+    const { startDay, endDay } = reportedWeek(now, head.timeZone);
+    const { start, end } = await midnightsIn(db, head.timeZone, startDay, endDay);
     const claimed = await db
       .insert(weeklyDigestSends)
       .values({ staffId: head.id, weekStart: start })
@@ -102,7 +112,7 @@ export async function sendWeeklyDigests(
           headName: head.displayName,
           departmentName: head.departmentName,
           schoolName: head.schoolName,
-          weekStart: start,
+          weekStart: startDay,
           rows,
           overviewUrl: `${deps.publicUrl}/department`,
         }),

@@ -12,6 +12,8 @@ export interface Actor {
   role: StaffRole;
   schoolId: string;
   schoolName: string;
+  /** IANA name: days and weeks in the overview and digest are the school's. */
+  schoolTimeZone: string;
   departmentId: string | null;
   departmentName: string | null;
 }
@@ -23,6 +25,7 @@ const actorColumns = {
   role: staff.role,
   schoolId: staff.schoolId,
   schoolName: schools.name,
+  schoolTimeZone: schools.timeZone,
   departmentId: staff.departmentId,
   departmentName: departments.name,
 };

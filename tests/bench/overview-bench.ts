@@ -15,6 +15,7 @@ import { connectDatabase } from "../../server/db/client";
 import { stopCluster } from "../../server/devstack/postgres";
 import { departmentOverview } from "../../server/department/department-overview.service";
 import { addDays, type DepartmentOverview } from "../../server/contracts/department-overview";
+import { DEFAULT_SCHOOL_TIME_ZONE } from "../../server/contracts/school";
 import { projectPath } from "../../server/paths";
 import { seedYear } from "../../scripts/seed-year";
 import { HttpAgent, signIn } from "../support/http-agent";
@@ -82,7 +83,7 @@ async function main() {
     for (const range of ranges) {
       const query = { from: range.from, to: range.to };
       let last: DepartmentOverview | null = null;
-      const direct = await time(async () => (last = await departmentOverview(database.db, science.id, query)));
+      const direct = await time(async () => (last = await departmentOverview(database.db, { departmentId: science.id, timeZone: DEFAULT_SCHOOL_TIME_ZONE }, query)));
       const shape = (o: DepartmentOverview) =>
         `${o.totals.lessons} lessons, ${o.totals.trialsRun} trials run, ${o.totals.pupilsTakingPart} pupils, ${o.weeks.length} weeks × ${o.lessonsByClass.length} classes`;
       const add = (name: string, times: number[], what: string) =>

@@ -23,6 +23,7 @@ describe("the head of department's overview", () => {
     await signInAs(page, ctx.stack.url, "Helen Marrable");
     await page.getByRole("link", { name: "Department" }).first().click();
     await page.getByRole("heading", { name: "Overview" }).waitFor();
+    await page.getByText("days are the school’s (Europe/London)").waitFor();
 
     // The demo's lesson a week ago is in the default range, the last 12 weeks.
     await page.getByTestId("overview-totals").waitFor();

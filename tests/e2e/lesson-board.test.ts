@@ -69,7 +69,7 @@ const me = {
   displayName: "Pat Invented",
   email: "teacher@school.invalid",
   role: "teacher",
-  school: { id: "2e3d4c5b-6a7f-4890-b1c2-d3e4f5a6b7c8", name: "Invented School" },
+  school: { id: "2e3d4c5b-6a7f-4890-b1c2-d3e4f5a6b7c8", name: "Invented School", timeZone: "Europe/London" },
   department: null,
 };
 

@@ -77,6 +77,21 @@ describe("the school admin in the browser", () => {
     await page.getByRole("alert").getByText("A head of department must keep a department").waitFor();
     await keepScreenshot(page, "e2e", "09b-admin-staff-departments");
 
+    // The school's time zone: saved, and still chosen after a reload.
+    const zone = page.getByRole("combobox", { name: "Time zone" });
+    expect(await zone.inputValue()).toBe("Europe/London");
+    await zone.selectOption("Europe/Dublin");
+    await page.getByRole("button", { name: "Save time zone" }).click();
+    await page.getByRole("form", { name: "School time zone" }).getByText("Saved.").waitFor();
+    await page.reload();
+    await zone.waitFor();
+    expect(await zone.inputValue()).toBe("Europe/Dublin");
+    await zone.scrollIntoViewIfNeeded();
+    await keepScreenshot(page, "e2e", "09c-admin-time-zone");
+    await zone.selectOption("Europe/London");
+    await page.getByRole("button", { name: "Save time zone" }).click();
+    await page.getByRole("form", { name: "School time zone" }).getByText("Saved.").waitFor();
+
     // The one refused request is the head's move above.
     expect(problems).toEqual(["Failed to load resource: the server responded with a status of 400 (Bad Request)"]);
     await context.close();

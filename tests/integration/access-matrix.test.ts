@@ -255,6 +255,13 @@ const ROUTES: RouteCase[] = [
     body: () => ({ period: "days_90" }),
     expected: adminOnly(200),
   },
+  {
+    route: "PUT /api/school/time-zone",
+    method: "PUT",
+    path: () => "/api/school/time-zone",
+    body: () => ({ timeZone: "Europe/London" }),
+    expected: adminOnly(200),
+  },
   { route: "GET /api/school/classes", method: "GET", path: () => "/api/school/classes", expected: adminOnly(200) },
   {
     route: "DELETE /api/classes/:id/pupil-data",

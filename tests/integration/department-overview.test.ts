@@ -5,15 +5,15 @@
  * worked out by hand in the comments.
  */
 import { readFileSync } from "node:fs";
-import { eq, inArray, isNotNull } from "drizzle-orm";
+import { eq, inArray, isNotNull, sql } from "drizzle-orm";
 import Papa from "papaparse";
 import { beforeAll, describe, expect, it } from "vitest";
 import type { DepartmentOverview } from "../../server/contracts/department-overview";
 import type { ApiErrorBody } from "../../server/contracts/errors";
 import type { Question } from "../../server/contracts/lessons";
 import type { Db } from "../../server/db/client";
-import { classes, lessonParticipants, lessons, predictions, trials } from "../../server/db/schema";
-import { OVERVIEW_CSV_HEADER } from "../../server/department/department-overview.service";
+import { auditEvents, classes, lessonParticipants, lessons, predictions, trials } from "../../server/db/schema";
+import { overviewCsvHeader } from "../../server/department/department-overview.service";
 import { defaultParams, endLesson, recordResult } from "../../server/lessons/lessons.service";
 import { projectPath } from "../../server/paths";
 import { PEOPLE, seedFixture, type Fixture } from "../support/fixtures";
@@ -185,7 +185,8 @@ describe("department overview (JSON)", () => {
     expect(status).toBe(200);
     expect(body.from).toBe("2026-11-02");
     expect(body.to).toBe("2026-11-29");
-    expect(body.timeZone).toBe("UTC");
+    // The school's default zone; in November London keeps GMT, so its days are UTC days.
+    expect(body.timeZone).toBe("Europe/London");
     expect(body.weeks).toEqual(["2026-11-02", "2026-11-09", "2026-11-16", "2026-11-23"]);
     // L1–L4; trials run 2 + 1 + 1; pupils 3 + 2 + 1 + 0; classes 11X, 11Y, =1+1; teachers A and B.
     expect(body.totals).toEqual({ lessons: 4, trialsRun: 4, pupilsTakingPart: 6, classesActive: 3, teachersActive: 2 });
@@ -291,7 +292,8 @@ describe("department overview (CSV)", () => {
     const text = await res.text();
     const parsed = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual([...OVERVIEW_CSV_HEADER]);
+    expect(parsed.meta.fields).toEqual(overviewCsvHeader("Europe/London"));
+    expect(parsed.meta.fields![0]).toBe("Week starting (Monday, Europe/London)");
     expect(parsed.meta.fields).toContain("Within 10 % of result (%)");
     expect(parsed.meta.fields).toContain("Median relative error (%)");
     const rows = parsed.data.map((r) => Object.values(r));
@@ -357,5 +359,52 @@ describe("per-trial summaries", () => {
     const { body } = await agents.otherHead.json<DepartmentOverview>(`/api/department/overview?${RANGE}`);
     expect(body.totals.pupilsTakingPart).toBe(4);
     expect(body.closeness[1]).toMatchObject({ trialsCompared: 1, predictions: 1, shareWithin10: 1 });
+  });
+});
+
+describe("the school's time zone", () => {
+  // British Summer Time is UTC+1 from 29 March to 25 October 2026 (the IANA tz database, Europe/London).
+  it("counts days and weeks in it: a lesson at 00:30 on a summer Monday in London is in that Monday's week", async () => {
+    const db = ctx.database.db;
+    const f = ctx.fixture;
+    // Sunday 7 June 23:30 UTC = Monday 8 June 00:30 BST; Sunday 14 June 23:30 UTC = Monday 15 June 00:30 BST.
+    await addLesson(db, "summer1", f.classA, f.staffIds.teacherA, "2026-06-07T23:30:00Z", []);
+    await addLesson(db, "summer2", f.classA, f.staffIds.teacherA, "2026-06-14T23:30:00Z", []);
+    const june = "from=2026-06-08&to=2026-06-21";
+
+    const london = await agents.head.json<DepartmentOverview>(`/api/department/overview?${june}`);
+    expect(london.body.timeZone).toBe("Europe/London");
+    expect(london.body.weeks).toEqual(["2026-06-08", "2026-06-15"]);
+    expect(london.body.lessonsByTeacher).toEqual([{ id: f.staffIds.teacherA, name: PEOPLE.teacherA.name, perWeek: [1, 1], total: 2 }]);
+
+    // The admin sets the school to UTC: the first lesson is now on Sunday 7 June, before the range,
+    // and the second on Sunday 14 June, in the first week.
+    const changed = await agents.admin.json<{ timeZone: string }>("/api/school/time-zone", { method: "PUT", json: { timeZone: "utc" } });
+    expect(changed).toEqual({ status: 200, body: { timeZone: "UTC" } });
+    const utc = await agents.head.json<DepartmentOverview>(`/api/department/overview?${june}`);
+    expect(utc.body.timeZone).toBe("UTC");
+    expect(utc.body.lessonsByTeacher).toEqual([{ id: f.staffIds.teacherA, name: PEOPLE.teacherA.name, perWeek: [1, 0], total: 1 }]);
+    const csv = await agents.head.get(`/api/department/overview.csv?${june}`);
+    expect((await csv.text()).split("\r\n")[0]).toContain("Week starting (Monday, UTC)");
+    const session = await agents.head.json<{ user: { school: { timeZone: string } } }>("/api/session");
+    expect(session.body.user.school.timeZone).toBe("UTC");
+
+    const [audit] = await db.select().from(auditEvents).where(eq(auditEvents.action, "school.time_zone_changed"));
+    expect(audit).toMatchObject({ actorStaffId: f.staffIds.admin, detail: { from: "Europe/London", to: "UTC" } });
+    expect((await agents.admin.json("/api/school/time-zone", { method: "PUT", json: { timeZone: "Europe/London" } })).status).toBe(200);
+  });
+
+  it("is the admin's to set, and only to a zone that exists", async () => {
+    const bad = await agents.admin.json<ApiErrorBody>("/api/school/time-zone", { method: "PUT", json: { timeZone: "Mars/Olympus" } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields?.timeZone).toEqual(["Choose a time zone from the list."]);
+    expect((await agents.head.json("/api/school/time-zone", { method: "PUT", json: { timeZone: "UTC" } })).status).toBe(403);
+    expect((await agents.teacherA.json("/api/school/time-zone", { method: "PUT", json: { timeZone: "UTC" } })).status).toBe(403);
+    expect((await new HttpAgent(ctx.stack.url).json("/api/school/time-zone", { method: "PUT", json: { timeZone: "UTC" } })).status).toBe(401);
+    // Every zone the picker offers is one Postgres knows (so none can pass the form and fail the query).
+    const known = await ctx.database.db.execute<{ name: string }>(sql`select name from pg_timezone_names`);
+    const names = new Set(known.rows.map((r) => r.name.toLowerCase()));
+    const missing = Intl.supportedValuesOf("timeZone").filter((z) => !names.has(z.toLowerCase()));
+    expect(missing).toEqual([]);
   });
 });

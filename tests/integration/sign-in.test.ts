@@ -32,7 +32,7 @@ describe("sign-in through the local OAuth2 provider", () => {
       id: ctx.fixture.staffIds.teacherA,
       email: PEOPLE.teacherA.email,
       role: "teacher",
-      school: { name: "Northfen School" },
+      school: { name: "Northfen School", timeZone: "Europe/London" },
       department: { name: "Science" },
     });
     const [row] = await ctx.database.db.select().from(staff).where(eq(staff.id, ctx.fixture.staffIds.teacherA));

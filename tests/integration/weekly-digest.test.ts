@@ -43,6 +43,10 @@ async function seed(db: Db): Promise<Fixture> {
   // Outside it: the week before, and this week.
   await addLesson(f.classA, f.staffIds.teacherA, new Date("2026-11-22T23:59:00Z"), "AAAAAF", PUPIL_NAMES, 3);
   await addLesson(f.classA, f.staffIds.teacherA, new Date("2026-11-30T00:00:00Z"), "AAAAAH", PUPIL_NAMES, 3);
+  // Summer, when London is on BST (UTC+1): Monday 1 June 00:30 BST is in the week of 1 June;
+  // Monday 8 June 00:30 BST is not.
+  await addLesson(f.classA, f.staffIds.teacherA, new Date("2026-05-31T23:30:00Z"), "AAAAAJ", PUPIL_NAMES.slice(0, 1), 1);
+  await addLesson(f.classA, f.staffIds.teacherA, new Date("2026-06-07T23:30:00Z"), "AAAAAK", PUPIL_NAMES, 2);
   return f;
 }
 
@@ -87,5 +91,18 @@ describe("weekly digest for heads of department", () => {
 
     const retried = await sendWeeklyDigests(db, { mailer: ctx.stack.mailer, publicUrl: ctx.stack.url, now: nextWeek });
     expect(retried).toEqual({ sent: 1, skipped: 1, failed: 0, quiet: 0 });
+  });
+
+  it("counts the week in the school's time zone (Europe/London, on BST in June)", async () => {
+    const { db } = ctx.database;
+    const arrived = ctx.stack.mail.waitFor((m) => m.to.includes(PEOPLE.head.email) && m.subject.includes("1 June 2026"));
+    const result = await sendWeeklyDigests(db, { mailer: ctx.stack.mailer, publicUrl: ctx.stack.url, now: new Date("2026-06-10T07:00:00Z") });
+    expect(result).toEqual({ sent: 1, skipped: 0, failed: 0, quiet: 1 });
+    const mail = await arrived;
+    expect(mail.subject).toBe("Linkleap weekly: Science, week of 1 June 2026");
+    expect(mail.text).toContain("Science ran 1 live lesson in the week of 1 June 2026: 1 trial run, 1 pupil place taken.");
+    // The week is claimed from Monday 00:00 BST, which is Sunday 23:00 UTC.
+    const claimed = await db.select().from(weeklyDigestSends).where(eq(weeklyDigestSends.weekStart, new Date("2026-05-31T23:00:00Z")));
+    expect(claimed).toHaveLength(2);
   });
 });

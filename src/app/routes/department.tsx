@@ -30,7 +30,7 @@ function DepartmentPage() {
       />
       {me.department ? (
         <>
-          <DepartmentOverview />
+          <DepartmentOverview timeZone={me.school.timeZone} />
           <h2 className="mt-4 text-2xl font-bold">Classes</h2>
           <ArchivedFilterBar value={filter} onChange={setFilter} />
           <DepartmentClasses archived={filter} viewerId={me.id} />

@@ -7,6 +7,7 @@ import { SkeletonList } from "@/components/ui/skeleton";
 import { useStaff } from "@/features/staff/api/get-staff";
 import { InvitationList } from "@/features/staff/components/invitation-list";
 import { InviteStaffForm } from "@/features/staff/components/invite-staff-form";
+import { TimeZoneForm } from "@/features/school/components/time-zone-form";
 import { StaffTable } from "@/features/staff/components/staff-table";
 import { useDocumentTitle } from "@/hooks/use-document-title";
 import { RequireRole } from "../layouts/require-role";
@@ -54,6 +55,12 @@ function StaffPage() {
           ) : (
             <StaffTable staff={staff.data} viewerId={me.id} />
           )}
+        </Section>
+        <Section
+          title="School time zone"
+          description="Heads of department see lessons counted by day and week in this zone, in the department overview and the weekly digest."
+        >
+          <TimeZoneForm current={me.school.timeZone} />
         </Section>
         <Section title="What the roles mean">
           <dl className="grid gap-4 md:grid-cols-3">

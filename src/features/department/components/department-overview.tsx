@@ -47,8 +47,11 @@ function ChartSlot({ what, children }: { what: string; children: ReactNode }) {
   );
 }
 
-/** The head of department's overview: totals of the department's live lessons, never a pupil's answers. */
-export function DepartmentOverview() {
+/**
+ * The head of department's overview: totals of the department's live lessons, never a pupil's
+ * answers. `timeZone` is the school's, in which the server counts days and weeks.
+ */
+export function DepartmentOverview({ timeZone }: { timeZone: string }) {
   const today = localToday();
   const [range, setRange] = useRangeParam(today);
   const query = useDepartmentOverview(range);
@@ -60,7 +63,7 @@ export function DepartmentOverview() {
       description={
         <>
           Live lessons in the department, as totals: no pupil’s name or answer is shown here. Weeks start on Monday; days are
-          counted in UTC.
+          the school’s ({timeZone}).
         </>
       }
       actions={

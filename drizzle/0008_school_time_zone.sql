@@ -1,0 +1,1 @@
+ALTER TABLE "schools" ADD COLUMN "time_zone" text DEFAULT 'Europe/London' NOT NULL;

@@ -1,0 +1,68 @@
+import { useEffect, useMemo, useState, type FormEvent } from "react";
+import { Button } from "@/components/ui/button";
+import { SelectField } from "@/components/ui/field";
+import { CheckCircleIcon } from "@/components/ui/icons";
+import { FormErrorNotice } from "@/components/ui/notice";
+import { errorMessage, isApiError } from "@/lib/api-client";
+import { useUpdateTimeZone } from "../api/update-time-zone";
+import { timeZoneGroups } from "../utils/time-zone-options";
+
+const clockIn = (timeZone: string) =>
+  new Date().toLocaleString("en-GB", { timeZone, weekday: "long", day: "numeric", month: "long", hour: "2-digit", minute: "2-digit" });
+
+/** The school's time zone, which the department overview's weeks and the weekly digest count in. */
+export function TimeZoneForm({ current }: { current: string }) {
+  const [zone, setZone] = useState(current);
+  const [saved, setSaved] = useState(false);
+  const update = useUpdateTimeZone();
+  const groups = useMemo(() => timeZoneGroups(current), [current]);
+  useEffect(() => setZone(current), [current]);
+
+  const submit = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    if (update.isPending) return;
+    setSaved(false);
+    update.mutate({ timeZone: zone }, { onSuccess: () => setSaved(true) });
+  };
+  const changed = zone !== current;
+  const fieldError = isApiError(update.error) ? update.error.fieldMessage("timeZone") : undefined;
+
+  return (
+    <form onSubmit={submit} noValidate aria-label="School time zone">
+      <SelectField
+        label="Time zone"
+        hint={`It is now ${clockIn(zone)} there.`}
+        error={fieldError ?? undefined}
+        value={zone}
+        onChange={(event) => {
+          setZone(event.target.value);
+          setSaved(false);
+        }}
+        wrapperClassName="max-w-md"
+      >
+        {groups.map((group) => (
+          <optgroup key={group.region} label={group.region}>
+            {group.zones.map((z) => (
+              <option key={z.value} value={z.value}>
+                {z.label}
+              </option>
+            ))}
+          </optgroup>
+        ))}
+      </SelectField>
+      {update.error && !fieldError ? <FormErrorNotice className="mt-4">{errorMessage(update.error)}</FormErrorNotice> : null}
+      <div className="mt-4 flex flex-wrap items-center gap-3">
+        <Button type="submit" variant="primary" busy={update.isPending} disabled={!changed && !update.isPending}>
+          Save time zone
+        </Button>
+        <p role="status" className="flex items-center gap-1.5 font-bold text-ok">
+          {saved && !changed ? (
+            <>
+              <CheckCircleIcon className="size-5" /> Saved.
+            </>
+          ) : null}
+        </p>
+      </div>
+    </form>
+  );
+}
