@@ -1,9 +1,11 @@
+import { useQueryClient } from "@tanstack/react-query";
 import { EmptyState } from "@/components/ui/empty-state";
 import { ErrorState } from "@/components/ui/error-state";
 import { PeopleIcon } from "@/components/ui/icons";
 import { PageHeader } from "@/components/ui/page-header";
 import { Section } from "@/components/ui/section";
 import { SkeletonList } from "@/components/ui/skeleton";
+import { authKeys } from "@/features/auth/api/auth-keys";
 import { useStaff } from "@/features/staff/api/get-staff";
 import { InvitationList } from "@/features/staff/components/invitation-list";
 import { InviteStaffForm } from "@/features/staff/components/invite-staff-form";
@@ -30,6 +32,7 @@ export function Component() {
 
 function StaffPage() {
   const me = useMe();
+  const queryClient = useQueryClient();
   const staff = useStaff();
   return (
     <>
@@ -60,7 +63,7 @@ function StaffPage() {
           title="School time zone"
           description="Heads of department see lessons counted by day and week in this zone, in the department overview and the weekly digest."
         >
-          <TimeZoneForm current={me.school.timeZone} />
+          <TimeZoneForm current={me.school.timeZone} onSaved={() => queryClient.invalidateQueries({ queryKey: authKeys.session() })} />
         </Section>
         <Section title="What the roles mean">
           <dl className="grid gap-4 md:grid-cols-3">

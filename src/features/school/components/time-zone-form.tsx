@@ -10,8 +10,11 @@ import { timeZoneGroups } from "../utils/time-zone-options";
 const clockIn = (timeZone: string) =>
   new Date().toLocaleString("en-GB", { timeZone, weekday: "long", day: "numeric", month: "long", hour: "2-digit", minute: "2-digit" });
 
-/** The school's time zone, which the department overview's weeks and the weekly digest count in. */
-export function TimeZoneForm({ current }: { current: string }) {
+/**
+ * The school's time zone, which the department overview's weeks and the weekly digest count in.
+ * `onSaved` lets the page refresh whatever carries the zone (the session).
+ */
+export function TimeZoneForm({ current, onSaved }: { current: string; onSaved: () => Promise<unknown> }) {
   const [zone, setZone] = useState(current);
   const [saved, setSaved] = useState(false);
   const update = useUpdateTimeZone();
@@ -22,7 +25,7 @@ export function TimeZoneForm({ current }: { current: string }) {
     event.preventDefault();
     if (update.isPending) return;
     setSaved(false);
-    update.mutate({ timeZone: zone }, { onSuccess: () => setSaved(true) });
+    update.mutate({ timeZone: zone }, { onSuccess: () => void onSaved().then(() => setSaved(true)) });
   };
   const changed = zone !== current;
   const fieldError = isApiError(update.error) ? update.error.fieldMessage("timeZone") : undefined;
