@@ -115,6 +115,29 @@ describe("running a trial", () => {
     expect(run.series.find((s) => s.name === "rise")!.t.length).toBeGreaterThan(200);
   }, 60_000);
 
+  it("leaves no link hanging still in mid-air: links are parked only once they rest on the floor or the heap", () => {
+    // The whole 1000-link run. Before the fix, the lower end of the strand hanging at the start
+    // was parked as "landed" and stood in the air above the heap to the end (links 3 to 6, at
+    // 0.07 to 0.13 m); a link at the top of a bounce could be parked the same way.
+    const run = runTrial(fountainRig, { links: 1000 }, { seed: 1, frameRate: 10 });
+    const last = run.frames.at(-1)!;
+    const halfSecondBefore = run.frames.at(-6)!;
+    const potHeight = run.params.potHeight as number;
+    const stillInMidAir: number[] = [];
+    for (let i = 0; i < last.length / 3; i++) {
+      const [x, y] = [last[i * 3]!, last[i * 3 + 1]!];
+      if (!Number.isFinite(y)) continue;
+      const still = x === halfSecondBefore[i * 3] && y === halfSecondBefore[i * 3 + 1];
+      // Above the floor heap (a few cm) and below the pot's pile.
+      if (still && y > 0.06 && y < potHeight - 0.05) stillInMidAir.push(i);
+    }
+    expect(stillInMidAir).toEqual([]);
+    // The check sees parked links at all: most of the chain lies still on the floor by the end.
+    let stillOnFloor = 0;
+    for (let i = 0; i < last.length / 3; i++) if (last[i * 3 + 1]! < 0.06 && last[i * 3] === halfSecondBefore[i * 3]) stillOnFloor++;
+    expect(stillOnFloor).toBeGreaterThan(500);
+  }, 120_000);
+
   it("refuses bad parameters with the parameter's name, unit and range", () => {
     let error: unknown;
     try {

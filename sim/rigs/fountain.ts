@@ -22,9 +22,15 @@ const WALL_MM = 6;
 const LEFT_PILE_MARGIN_MM = 8;
 /** Links this close to the floor (centre, mm) have landed. */
 const LANDED_MM = 25;
-/** Below this height (mm) a link moving slower than RESTING_SPEED (m/s) has landed on the heap. */
+/**
+ * Below this height (mm) a link that has moved slower than RESTING_SPEED (m/s) for RESTING_MS
+ * has landed on the heap. The time matters: a link at the top of a bounce, or in the strand
+ * hanging still at the start, is slow only for a moment (under 0.5 m/s near an apex for
+ * 2 × 0.5/9.81 ≈ 0.1 s), and parking it there would leave it hanging in mid-air.
+ */
 const RESTING_ON_HEAP_MM = 300;
 const RESTING_SPEED = 0.5;
+const RESTING_MS = 150;
 /** Landed links kept in the world (the rest are parked where they lie). */
 const KEPT_ON_FLOOR = 8;
 /** The pile's support follows its target height with this lag, ms. */
@@ -169,12 +175,23 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
     };
     const inPot = (body: Matter.Body) => body.position.y > outOfPotY && body.position.x < xR;
 
-    // On the floor, or come to rest on the heap of links already there.
-    const hasLanded = (body: Matter.Body) => {
+    // On the floor, or come to rest on the heap of links already there. Asked every step about
+    // the next link to land only, so one clock is enough: when that link went slow.
+    let slowSince = Number.NaN;
+    let slowIndex = -1;
+    const hasLanded = (index: number) => {
+      const body = bodies[index]!;
       if (body.position.y > -LANDED_MM) return true;
-      if (body.position.y < -RESTING_ON_HEAP_MM) return false;
       const step = Math.hypot(body.position.x - body.positionPrev.x, body.position.y - body.positionPrev.y);
-      return step / world.settings.dt < RESTING_SPEED;
+      if (body.position.y < -RESTING_ON_HEAP_MM || step / world.settings.dt >= RESTING_SPEED) {
+        slowIndex = -1;
+        return false;
+      }
+      if (slowIndex !== index) {
+        slowIndex = index;
+        slowSince = world.time;
+      }
+      return world.time - slowSince >= RESTING_MS;
     };
 
     const updatePile = () => {
@@ -203,7 +220,7 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
       for (const i of frozen) world.moveKinematic(bodies[i]!, bodies[i]!.position.x, baseY[i]! - lift);
       world.moveKinematic(piston.body, piston.body.position.x, firstRowY + (frozenRow + 0.5) * rowSpacing + 2.5 - lift);
       // Landed links: keep the last few moving, park the rest where they lie.
-      while (landed < firstLying && hasLanded(bodies[landed]!)) landed++;
+      while (landed < firstLying && hasLanded(landed)) landed++;
       while (parkedOnFloor < landed - KEPT_ON_FLOOR) {
         world.park(bodies[parkedOnFloor]!);
         const joint = chain.joints[parkedOnFloor];
