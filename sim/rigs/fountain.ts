@@ -355,7 +355,13 @@ export const fountainRig: RigDefinition<typeof fountainSchema> = {
         return [{ kind: "rect", role: "pot", x: metres((b.min.x + b.max.x) / 2), y: -metres((b.min.y + b.max.y) / 2), width: metres(b.max.x - b.min.x), height: metres(b.max.y - b.min.y), angle: 0 }];
       },
       // The chain still waiting below the frozen row is stock, not drawn.
-      hidden: (i) => i >= frozenFirst() + linksPerRow && !world.isActive(bodies[i]!),
+      // Rows below the frozen one wait outside the world at their starting depth: not drawn.
+      // (By row, not by a row's length in links: rows differ by a link or two, and a link of
+      // the next row drawn early showed at its starting depth, in mid-air below the pot.)
+      hidden: (i) => {
+        const frozenRow = topRow + looseRows;
+        return frozenRow < rowCount && i >= rowEndIndex(frozenRow) && !world.isActive(bodies[i]!);
+      },
       scene: () => ({
         shapes,
         view: [-0.35 - params.potWidth, -0.02, 0.35, params.potHeight + 0.45],
