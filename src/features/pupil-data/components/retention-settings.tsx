@@ -1,8 +1,8 @@
 import { useEffect, useId, useState, type FormEvent } from "react";
 import { RETENTION_LABELS, RETENTION_PERIODS, type RetentionPeriod, type RetentionSettings } from "@contracts/retention";
-import { Button } from "@/components/ui/button";
 import { CheckCircleIcon, ClockIcon, ErrorIcon } from "@/components/ui/icons";
 import { FormErrorNotice } from "@/components/ui/notice";
+import { SaveRow } from "@/components/ui/save-row";
 import { errorMessage } from "@/lib/api-client";
 import { cx } from "@/lib/cx";
 import { useUpdateRetention } from "../api/update-retention";
@@ -63,18 +63,12 @@ export function RetentionForm({ settings }: { settings: RetentionSettings }) {
         </div>
       </fieldset>
       {update.error ? <FormErrorNotice className="mt-4">{errorMessage(update.error)}</FormErrorNotice> : null}
-      <div className="mt-4 flex flex-wrap items-center gap-3">
-        <Button type="submit" variant="primary" busy={update.isPending} disabled={!changed && !update.isPending}>
-          Save retention period
-        </Button>
-        <p role="status" className="flex items-center gap-1.5 font-bold text-ok">
-          {saved && !changed ? (
-            <>
-              <CheckCircleIcon className="size-5" /> Saved. The next deletion run uses it.
-            </>
-          ) : null}
-        </p>
-      </div>
+      <SaveRow
+        label="Save retention period"
+        busy={update.isPending}
+        unchanged={!changed}
+        saved={saved && !changed ? "Saved. The next deletion run uses it." : null}
+      />
     </form>
   );
 }

@@ -1,8 +1,7 @@
 import { useEffect, useMemo, useState, type FormEvent } from "react";
-import { Button } from "@/components/ui/button";
 import { SelectField } from "@/components/ui/field";
-import { CheckCircleIcon } from "@/components/ui/icons";
 import { FormErrorNotice } from "@/components/ui/notice";
+import { SaveRow } from "@/components/ui/save-row";
 import { errorMessage, isApiError } from "@/lib/api-client";
 import { useUpdateTimeZone } from "../api/update-time-zone";
 import { timeZoneGroups } from "../utils/time-zone-options";
@@ -54,18 +53,7 @@ export function TimeZoneForm({ current, onSaved }: { current: string; onSaved: (
         ))}
       </SelectField>
       {update.error && !fieldError ? <FormErrorNotice className="mt-4">{errorMessage(update.error)}</FormErrorNotice> : null}
-      <div className="mt-4 flex flex-wrap items-center gap-3">
-        <Button type="submit" variant="primary" busy={update.isPending} disabled={!changed && !update.isPending}>
-          Save time zone
-        </Button>
-        <p role="status" className="flex items-center gap-1.5 font-bold text-ok">
-          {saved && !changed ? (
-            <>
-              <CheckCircleIcon className="size-5" /> Saved.
-            </>
-          ) : null}
-        </p>
-      </div>
+      <SaveRow label="Save time zone" busy={update.isPending} unchanged={!changed} saved={saved && !changed ? "Saved." : null} />
     </form>
   );
 }
