@@ -11,17 +11,19 @@ export interface InvitationMailDetails {
   invitedBy: string | null;
   link: string;
   expiresAt: Date;
+  /** The school's time zone: the last day is the school's. */
+  timeZone: string;
 }
 
-const formatDate = (date: Date) =>
-  date.toLocaleDateString("en-GB", { weekday: "long", day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+const formatDate = (date: Date, timeZone: string) =>
+  date.toLocaleDateString("en-GB", { weekday: "long", day: "numeric", month: "long", year: "numeric", timeZone });
 
 /** The invitation message, as plain text and HTML. Staff details only: no pupil data ever goes in. */
 export function invitationMail(d: InvitationMailDetails): OutgoingMail {
   const role = `${d.role === "head_of_department" ? "" : "a "}${STAFF_ROLE_LABELS[d.role].toLowerCase()}`;
   const where = d.departmentName ? `${role} in the ${d.departmentName} department` : role;
   const who = d.invitedBy ? `${d.invitedBy} has invited you` : "You have been invited";
-  const expires = formatDate(d.expiresAt);
+  const expires = formatDate(d.expiresAt, d.timeZone);
   const text = [
     `Hello ${d.displayName},`,
     "",

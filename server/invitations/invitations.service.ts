@@ -57,6 +57,7 @@ async function sendInvitation(deps: InvitationDeps, actor: Actor, row: Invitatio
     invitedBy: actor.displayName,
     link: invitationLink(deps.publicUrl, token),
     expiresAt: row.expiresAt,
+    timeZone: actor.schoolTimeZone,
   });
   try {
     await deps.mailer.send(mail);

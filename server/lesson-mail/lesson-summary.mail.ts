@@ -20,14 +20,15 @@ export interface LessonSummaryDetails {
   className: string;
   startedAt: Date;
   endedAt: Date;
+  /** The school's time zone: the start time is given in it. */
+  timeZone: string;
   participantCount: number;
   trials: SummaryTrial[];
   reviewUrl: string;
 }
 
-const formatWhen = (date: Date) =>
-  date.toLocaleString("en-GB", { weekday: "long", day: "numeric", month: "long", hour: "2-digit", minute: "2-digit", timeZone: "UTC" }) +
-  " UTC";
+const formatWhen = (date: Date, timeZone: string) =>
+  date.toLocaleString("en-GB", { weekday: "long", day: "numeric", month: "long", hour: "2-digit", minute: "2-digit", timeZone });
 
 /** Three significant figures, as the board shows them. */
 const figure = (value: number | null, unit: string) =>
@@ -48,7 +49,7 @@ export function lessonSummaryMail(d: LessonSummaryDetails): OutgoingMail {
   const text = [
     `Hello ${d.teacherName},`,
     "",
-    `Your live lesson started ${formatWhen(d.startedAt)} has ended.`,
+    `Your live lesson started ${formatWhen(d.startedAt, d.timeZone)} has ended.`,
     headline,
     "",
     ...(d.trials.length ? d.trials.map(trialLine) : ["No trials were set up."]),
@@ -63,7 +64,7 @@ export function lessonSummaryMail(d: LessonSummaryDetails): OutgoingMail {
   const html = simpleHtmlMail({
     paragraphs: [
       `Hello ${escapeHtml(d.teacherName)},`,
-      `Your live lesson started ${escapeHtml(formatWhen(d.startedAt))} has ended. ${escapeHtml(headline)}`,
+      `Your live lesson started ${escapeHtml(formatWhen(d.startedAt, d.timeZone))} has ended. ${escapeHtml(headline)}`,
       ...(d.trials.length ? d.trials.map((t) => escapeHtml(trialLine(t))) : ["No trials were set up."]),
     ],
     link: { href: d.reviewUrl, label: "Review the lesson" },

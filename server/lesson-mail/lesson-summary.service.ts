@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { median } from "simple-statistics";
 import { QUESTION_QUANTITIES, RIG_NAMES } from "../contracts/lesson-questions";
 import type { Db } from "../db/client";
-import { staff } from "../db/schema";
+import { schools, staff } from "../db/schema";
 import * as repo from "../lessons/lessons.repository";
 import { teacherLesson } from "../lessons/lessons.views";
 import type { Mailer } from "../mail/mailer";
@@ -16,8 +16,9 @@ export async function sendLessonSummary(db: Db, deps: { mailer: Pick<Mailer, "se
   const bundle = await repo.loadLessonBundle(db, lessonId);
   if (!bundle || bundle.lesson.status !== "ended" || !bundle.lesson.endedAt) return false;
   const [teacher] = await db
-    .select({ email: staff.email, displayName: staff.displayName, removedAt: staff.removedAt })
+    .select({ email: staff.email, displayName: staff.displayName, removedAt: staff.removedAt, timeZone: schools.timeZone })
     .from(staff)
+    .innerJoin(schools, eq(schools.id, staff.schoolId))
     .where(eq(staff.id, bundle.lesson.teacherId));
   if (!teacher || teacher.removedAt) return false;
 
@@ -46,9 +47,10 @@ export async function sendLessonSummary(db: Db, deps: { mailer: Pick<Mailer, "se
       className: bundle.className,
       startedAt: bundle.lesson.startedAt,
       endedAt: bundle.lesson.endedAt,
+      timeZone: teacher.timeZone,
       participantCount: bundle.participants.length,
       trials,
-      reviewUrl: `${deps.publicUrl}/classes/${bundle.lesson.classId}`,
+      reviewUrl: `${deps.publicUrl}/lessons/${lessonId}/review`,
     }),
   );
   return true;

@@ -54,7 +54,7 @@ describe("lesson summary e-mail", () => {
     expect(mail.text).toContain("1 trial (1 run), 3 pupils took part");
     // Median of 10, 12 and 30 cm; simulation 0.143 m shown in the question's cm.
     expect(mail.text).toContain("3 answers; class median 12 cm; simulation 14.3 cm; theory");
-    expect(mail.text).toContain(`${ctx.stack.url}/classes/${ctx.fixture.classA}`);
+    expect(mail.text).toContain(`${ctx.stack.url}/lessons/${lessonId}/review`);
     for (const p of pupils) {
       expect(mail.text).not.toContain(p.name);
       expect(mail.html).not.toContain(p.name);
