@@ -7,7 +7,7 @@
 import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
-import { FORBIDDEN_MARKERS, kb, readManifest } from "./pupil-first-load";
+import { FORBIDDEN_MARKERS, kb, readManifest, staticImportsOf } from "./pupil-first-load";
 
 export const STAFF_ENTRY_SOURCE = "src/app/staff-main.tsx";
 export const BOARD_ROUTE_SOURCE = "src/app/routes/lesson-board.tsx";
@@ -42,15 +42,7 @@ export function measureBoardLoad(distDir: string): BoardLoad {
   for (const key of [STAFF_ENTRY_SOURCE, BOARD_ROUTE_SOURCE]) if (!manifest[key]) throw new Error(`The build manifest has no ${key}.`);
 
   // Static imports only: the route chunk's dynamic imports (the QR code) load later, if at all.
-  const seen = new Set<string>();
-  const visit = (key: string) => {
-    if (seen.has(key)) return;
-    const chunk = manifest[key];
-    if (!chunk) throw new Error(`The build manifest lists ${key} as an import but has no entry for it.`);
-    seen.add(key);
-    for (const imp of chunk.imports ?? []) visit(imp);
-  };
-  for (const key of [entryKey, STAFF_ENTRY_SOURCE, BOARD_ROUTE_SOURCE]) visit(key);
+  const seen = staticImportsOf(manifest, [entryKey, STAFF_ENTRY_SOURCE, BOARD_ROUTE_SOURCE]);
 
   // Vite lists a `new Worker(new URL(…))` bundle among the importing chunk's assets.
   const workerFiles = [

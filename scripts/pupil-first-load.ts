@@ -50,13 +50,11 @@ export function readManifest(distDir: string): Manifest {
   return JSON.parse(readFileSync(join(distDir, ".vite", "manifest.json"), "utf8")) as Manifest;
 }
 
-export function measurePupilFirstLoad(distDir: string): FirstLoad {
-  const manifest = readManifest(distDir);
-  const entryKey = Object.keys(manifest).find((k) => manifest[k]!.isEntry);
-  if (!entryKey) throw new Error("The build manifest has no entry.");
-  if (!manifest[PUPIL_ENTRY_SOURCE]) throw new Error(`The build manifest has no ${PUPIL_ENTRY_SOURCE}.`);
-
-  // Static imports only: dynamic ones load later, if at all.
+/**
+ * The manifest keys a page loads up front from these starting chunks: each one and everything it
+ * imports statically (dynamic imports load later, if at all).
+ */
+export function staticImportsOf(manifest: Manifest, start: readonly string[]): Set<string> {
   const seen = new Set<string>();
   const visit = (key: string) => {
     if (seen.has(key)) return;
@@ -65,8 +63,17 @@ export function measurePupilFirstLoad(distDir: string): FirstLoad {
     seen.add(key);
     for (const imp of chunk.imports ?? []) visit(imp);
   };
-  visit(entryKey);
-  visit(PUPIL_ENTRY_SOURCE);
+  for (const key of start) visit(key);
+  return seen;
+}
+
+export function measurePupilFirstLoad(distDir: string): FirstLoad {
+  const manifest = readManifest(distDir);
+  const entryKey = Object.keys(manifest).find((k) => manifest[k]!.isEntry);
+  if (!entryKey) throw new Error("The build manifest has no entry.");
+  if (!manifest[PUPIL_ENTRY_SOURCE]) throw new Error(`The build manifest has no ${PUPIL_ENTRY_SOURCE}.`);
+
+  const seen = staticImportsOf(manifest, [entryKey, PUPIL_ENTRY_SOURCE]);
 
   const jsFiles = [...seen].map((k) => manifest[k]!.file);
   const cssFiles = [...new Set([...seen].flatMap((k) => manifest[k]!.css ?? []))];

@@ -32,11 +32,18 @@ function paramColumnsOf(review: LessonReview): ParamColumn[] {
   return columns;
 }
 
-const paramCells = (trial: ReviewTrial, columns: ParamColumn[]): CsvCell[] =>
-  columns.map((c) => {
+/** The columns every export starts with: which trial, its rig and question, and its set-up. */
+const trialHeader = (params: ParamColumn[]) => ["trial", "rig", "question", ...params.map((c) => c.header)];
+
+const trialCells = (trial: ReviewTrial, columns: ParamColumn[]): CsvCell[] => [
+  trial.position,
+  trial.rigLabel,
+  trial.question.prompt,
+  ...columns.map((c) => {
     const p = trial.shownParams.find((x) => x.key === c.key && x.unit === c.unit);
     return p === undefined ? null : p.value;
-  });
+  }),
+];
 
 /** Per unit: this trial's value in the column of its own unit, empty in the others. */
 const inUnitColumns = (units: string[], unit: string, value: number | null): CsvCell[] => units.map((u) => (u === unit ? value : null));
@@ -51,10 +58,7 @@ export function predictionsCsv(review: LessonReview): string {
   const units = unitsOf(review);
   const params = paramColumnsOf(review);
   const header = [
-    "trial",
-    "rig",
-    "question",
-    ...params.map((c) => c.header),
+    ...trialHeader(params),
     "pupil",
     "round",
     ...units.map((u) => `prediction${unitSuffix(u)}`),
@@ -73,10 +77,7 @@ export function predictionsCsv(review: LessonReview): string {
     const unit = t.question.unit;
     for (const p of t.predictions) {
       rows.push([
-        t.position,
-        t.rigLabel,
-        t.question.prompt,
-        ...paramCells(t, params),
+        ...trialCells(t, params),
         p.pupil,
         p.round === 1 ? "before the run" : "re-vote",
         ...inUnitColumns(units, unit, p.value),
@@ -101,10 +102,7 @@ export function predictionsCsv(review: LessonReview): string {
     for (const participantId of new Set(unpaired.map((e) => e.participantId))) {
       const mine = unpaired.filter((e) => e.participantId === participantId);
       rows.push([
-        t.position,
-        t.rigLabel,
-        t.question.prompt,
-        ...paramCells(t, params),
+        ...trialCells(t, params),
         mine[0]!.pupil,
         null,
         ...inUnitColumns(units, unit, null),
@@ -128,10 +126,7 @@ export function resultsCsv(review: LessonReview): string {
   const units = unitsOf(review);
   const params = paramColumnsOf(review);
   const header = [
-    "trial",
-    "rig",
-    "question",
-    ...params.map((c) => c.header),
+    ...trialHeader(params),
     ...units.map((u) => `result${unitSuffix(u)}`),
     ...units.map((u) => `result uncertainty${unitSuffix(u)}`),
     ...units.map((u) => `theory${unitSuffix(u)}`),
@@ -149,10 +144,7 @@ export function resultsCsv(review: LessonReview): string {
     const unit = t.question.unit;
     const [first, second] = [t.summary[1], t.summary[2]];
     return [
-      t.position,
-      t.rigLabel,
-      t.question.prompt,
-      ...paramCells(t, params),
+      ...trialCells(t, params),
       ...inUnitColumns(units, unit, sig(t.result?.value)),
       ...inUnitColumns(units, unit, sig(t.result?.uncertainty)),
       ...inUnitColumns(units, unit, sig(t.theory?.value)),

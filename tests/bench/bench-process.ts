@@ -4,10 +4,11 @@
  * percentile they report.
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { readFileSync } from "node:fs";
+import { readFileSync, rmSync } from "node:fs";
 import { createServer } from "node:net";
-import { join } from "node:path";
-import { projectPath } from "../../server/paths";
+import { join, relative } from "node:path";
+import { stopCluster } from "../../server/devstack/postgres";
+import { PROJECT_ROOT, projectPath } from "../../server/paths";
 
 export async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -36,10 +37,26 @@ export function startChild(command: string[], env: Record<string, string>, ready
   });
 }
 
-/** Linkleap as `npm start` runs it: node with tsx's loader, no tsx parent between the signal and the server. */
-export async function startLinkleap(env: Record<string, string>): Promise<ChildProcess> {
+/**
+ * Linkleap as `npm start` runs it (node with tsx's loader, no tsx parent between the signal and
+ * the server), on fresh data under `dataDir` and free ports, with the client already built.
+ */
+export async function startLinkleap(dataDir: string): Promise<{ child: ChildProcess; url: string; pgPort: number }> {
+  // A cluster left running by an interrupted run would outlive its deleted folder.
+  await stopCluster(join(dataDir, "postgres"));
+  rmSync(dataDir, { recursive: true, force: true });
+  const [port, pgPort, signInPort, smtpPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
+  console.log(`Starting Linkleap as \`npm start\` does (data in ${relative(PROJECT_ROOT, dataDir)}, port ${port})…`);
+  const env = {
+    LINKLEAP_DATA_DIR: dataDir,
+    PORT: String(port),
+    PG_PORT: String(pgPort),
+    SIGN_IN_PORT: String(signInPort),
+    LOCAL_SMTP_PORT: String(smtpPort),
+    LINKLEAP_SKIP_BUILD: "1",
+  };
   const { child } = await startChild([process.execPath, "--import", "tsx", projectPath("server", "index.ts")], env, /is running at/);
-  return child;
+  return { child, url: `http://127.0.0.1:${port}`, pgPort };
 }
 
 export function stopChild(child: ChildProcess): Promise<void> {

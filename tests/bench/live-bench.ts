@@ -8,7 +8,6 @@
  * about speed. Options: --lessons N (default 10) --pupils N (35) --spread-ms N (2000).
  */
 import { randomUUID } from "node:crypto";
-import { rmSync } from "node:fs";
 import { join } from "node:path";
 import { parseArgs } from "node:util";
 import pg from "pg";
@@ -19,7 +18,7 @@ import type { AckReply, ClientToServerEvents, ServerToClientEvents } from "../..
 import { stopCluster } from "../../server/devstack/postgres";
 import { projectPath } from "../../server/paths";
 import { HttpAgent, signIn } from "../support/http-agent";
-import { freePort, percentile, readDatabaseUrl, startChild, startLinkleap, stopChild } from "./bench-process";
+import { percentile, readDatabaseUrl, startChild, startLinkleap, stopChild } from "./bench-process";
 
 type LessonSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
 
@@ -108,20 +107,7 @@ function waitFor(check: () => boolean, timeoutMs: number): Promise<boolean> {
 }
 
 async function benchLinkleap(): Promise<LoadResult & { lost: number; stored: number }> {
-  // A cluster left running by an interrupted run would outlive its deleted folder.
-  await stopCluster(join(DATA_DIR, "postgres"));
-  rmSync(DATA_DIR, { recursive: true, force: true });
-  const [port, pgPort, signInPort, smtpPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
-  const url = `http://127.0.0.1:${port}`;
-  console.log(`Starting Linkleap as \`npm start\` does (data in .data/bench, port ${port})…`);
-  const child = await startLinkleap({
-    LINKLEAP_DATA_DIR: DATA_DIR,
-    PORT: String(port),
-    PG_PORT: String(pgPort),
-    SIGN_IN_PORT: String(signInPort),
-    LOCAL_SMTP_PORT: String(smtpPort),
-    LINKLEAP_SKIP_BUILD: "1",
-  });
+  const { child, url, pgPort } = await startLinkleap(DATA_DIR);
   const sockets: LessonSocket[] = [];
   try {
     const teacher = new HttpAgent(url);

@@ -7,7 +7,6 @@
  * term and one month. Prints p50 / p95 / max per case; asserts nothing about speed (the target,
  * p95 ≤ 100 ms, is printed beside the figures). Options: --runs N (default 60) --seed N (2026).
  */
-import { rmSync } from "node:fs";
 import { cpus, loadavg } from "node:os";
 import { join } from "node:path";
 import { parseArgs } from "node:util";
@@ -19,7 +18,7 @@ import { DEFAULT_SCHOOL_TIME_ZONE } from "../../server/contracts/school";
 import { projectPath } from "../../server/paths";
 import { seedYear } from "../../scripts/seed-year";
 import { HttpAgent, signIn } from "../support/http-agent";
-import { freePort, percentile, readDatabaseUrl, startLinkleap, stopChild } from "./bench-process";
+import { percentile, readDatabaseUrl, startLinkleap, stopChild } from "./bench-process";
 
 const { values: args } = parseArgs({ options: { runs: { type: "string", default: "60" }, seed: { type: "string", default: "2026" } } });
 const RUNS = Number(args.runs);
@@ -45,20 +44,7 @@ async function main() {
   // Other work on the machine shows in the figures: say how busy it was.
   const load = () => `load average ${loadavg().map((l) => l.toFixed(2)).join(" / ")} on ${cpus().length} cores`;
   console.log(`  ${load()}`);
-  // A cluster left running by an interrupted run would outlive its deleted folder.
-  await stopCluster(join(DATA_DIR, "postgres"));
-  rmSync(DATA_DIR, { recursive: true, force: true });
-  const [port, pgPort, signInPort, smtpPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
-  const url = `http://127.0.0.1:${port}`;
-  console.log(`Starting Linkleap as \`npm start\` does (data in .data/bench-overview, port ${port})…`);
-  const child = await startLinkleap({
-    LINKLEAP_DATA_DIR: DATA_DIR,
-    PORT: String(port),
-    PG_PORT: String(pgPort),
-    SIGN_IN_PORT: String(signInPort),
-    LOCAL_SMTP_PORT: String(smtpPort),
-    LINKLEAP_SKIP_BUILD: "1",
-  });
+  const { child, url, pgPort } = await startLinkleap(DATA_DIR);
   const database = connectDatabase(readDatabaseUrl(DATA_DIR, pgPort));
   try {
     console.log("Seeding a school year of invented lessons…");

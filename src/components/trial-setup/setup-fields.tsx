@@ -155,43 +155,24 @@ export function SetupFields({ draft, change, errors }: {
             ) : null}
           </div>
         )}
-        <label className="flex min-h-touch items-center gap-2">
-          <input
-            type="checkbox"
-            className="size-5"
-            checked={q.askReason}
-            onChange={(e) => {
-              const askReason = e.target.checked;
-              change((d) => ({ ...d, question: { ...d.question, askReason } }));
-            }}
-          />
-          Ask pupils for a reason too
-        </label>
-        <label className="flex min-h-touch items-center gap-2">
-          <input
-            type="checkbox"
-            className="size-5"
-            checked={q.askExplanation}
-            onChange={(e) => {
-              const askExplanation = e.target.checked;
-              change((d) => ({ ...d, question: { ...d.question, askExplanation } }));
-            }}
-          />
-          Ask pupils to explain what they saw after the run
-        </label>
-        <label className="flex min-h-touch items-center gap-2">
-          <input
-            type="checkbox"
-            className="size-5"
-            checked={q.revote}
-            onChange={(e) => {
-              const revote = e.target.checked;
-              change((d) => ({ ...d, question: { ...d.question, revote } }));
-            }}
-          />
-          Offer a re-vote after the discussion
-        </label>
+        <QuestionSwitch label="Ask pupils for a reason too" checked={q.askReason} onChange={(askReason) => change((d) => ({ ...d, question: { ...d.question, askReason } }))} />
+        <QuestionSwitch
+          label="Ask pupils to explain what they saw after the run"
+          checked={q.askExplanation}
+          onChange={(askExplanation) => change((d) => ({ ...d, question: { ...d.question, askExplanation } }))}
+        />
+        <QuestionSwitch label="Offer a re-vote after the discussion" checked={q.revote} onChange={(revote) => change((d) => ({ ...d, question: { ...d.question, revote } }))} />
       </fieldset>
     </>
+  );
+}
+
+/** One of the question's on/off choices, as a labelled checkbox. */
+function QuestionSwitch({ label, checked, onChange }: { label: string; checked: boolean; onChange: (checked: boolean) => void }) {
+  return (
+    <label className="flex min-h-touch items-center gap-2">
+      <input type="checkbox" className="size-5" checked={checked} onChange={(e) => onChange(e.target.checked)} />
+      {label}
+    </label>
   );
 }
