@@ -3,7 +3,7 @@
  * it is never served to anyone else), and the closeness maths shared by the server, its CSV
  * exports and the review page. Plain types and functions: no zod, no sim/.
  */
-import type { Round } from "./lesson-rules";
+import { isWithin10, type Round } from "./lesson-rules";
 import type { Question, ShownParam, ShownValue, Tally } from "./lessons";
 
 /**
@@ -22,7 +22,7 @@ export interface Closeness {
 export function closenessOf(prediction: number, result: number): Closeness | null {
   if (!Number.isFinite(prediction) || !Number.isFinite(result)) return null;
   const r = Math.abs(result);
-  const within10 = Math.abs(prediction - result) <= 0.1 * r + 1e-9 * r;
+  const within10 = isWithin10(prediction, result);
   if (r === 0) return { signedRelativeError: null, absoluteRelativeError: null, within10 };
   const signed = (prediction - result) / r;
   return { signedRelativeError: signed, absoluteRelativeError: Math.abs(signed), within10 };

@@ -138,3 +138,12 @@ export function parseTypedNumber(raw: string): number | null {
 /** What the remote can ask the board's player to do (the board plays; the remote has no drawing). */
 export const BOARD_CONTROLS = ["toggle-play", "toggle-slow", "replay"] as const;
 export type BoardControl = (typeof BOARD_CONTROLS)[number];
+
+/**
+ * Within 10 % of the result, as the board, the review and the overview all count it:
+ * |v − r| ≤ 0.1·|r|, with a 1e-9·|r| allowance for rounding so that 11 against 10 counts.
+ */
+export function isWithin10(value: number, result: number): boolean {
+  const r = Math.abs(result);
+  return Math.abs(value - result) <= 0.1 * r + 1e-9 * r;
+}

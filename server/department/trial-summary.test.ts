@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Question } from "../contracts/lessons";
-import { isWithin10, resultInQuestionUnit, summariseTrial } from "./trial-summary";
+import { isWithin10 } from "../contracts/lesson-rules";
+import { resultInQuestionUnit, summariseTrial } from "./trial-summary";
 
 const numberQuestion = (unit: string, quantity = "rise"): Question => ({
   kind: "number",

@@ -1,6 +1,6 @@
 import { and, eq, inArray, isNotNull, sql } from "drizzle-orm";
 import { quantileSorted } from "simple-statistics";
-import { perSiOf } from "../contracts/lesson-rules";
+import { isWithin10, perSiOf } from "../contracts/lesson-rules";
 import type { Question } from "../contracts/lessons";
 import type { Db } from "../db/client";
 import { predictions, trials } from "../db/schema";
@@ -16,18 +16,6 @@ export interface TrialSummary {
   medianRelError: number | null;
 }
 
-const TEN_PERCENT = 0.1;
-const ROUNDING = 1e-9;
-
-/**
- * Within 10 % as the live board counts it (src/features/lesson-graph/utils/prediction-summary.ts,
- * `isWithin10`): |v − r| ≤ 0.1·|r| plus a 1e-9·|r| rounding allowance, so 11 against 10 counts.
- * Repeated here because server code may not import the client.
- */
-export function isWithin10(value: number, result: number): boolean {
-  const r = Math.abs(result);
-  return Math.abs(value - result) <= TEN_PERCENT * r + ROUNDING * r;
-}
 
 /**
  * The closeness figures of one trial. Values and result in the same unit. The median is R-7

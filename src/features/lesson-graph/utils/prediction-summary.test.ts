@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { choiceHoldingResult, countChoices, isWithin10, summariseAnswers } from "./prediction-summary";
+import { isWithin10 } from "@contracts/lesson-rules";
+import { choiceHoldingResult, countChoices, summariseAnswers } from "./prediction-summary";
 
 /**
  * Hyndman & Fan (1996), definition 7, written out independently of simple-statistics:

@@ -1,4 +1,5 @@
 import { quantileSorted } from "simple-statistics";
+import { isWithin10 } from "@contracts/lesson-rules";
 
 /**
  * Summary figures for the comparison graph. Quartiles and the median come from simple-statistics
@@ -29,14 +30,6 @@ export interface PredictionSummary {
   max: number | null;
 }
 
-const TEN_PERCENT = 0.1;
-const ROUNDING = 1e-9;
-
-/** True when `value` is within 10 % of `result`, as defined on {@link PredictionSummary.shareWithin10}. */
-export function isWithin10(value: number, result: number): boolean {
-  const r = Math.abs(result);
-  return Math.abs(value - result) <= TEN_PERCENT * r + ROUNDING * r;
-}
 
 /** Median, quartiles, spread and closeness to the result of a class's number answers. */
 export function summariseAnswers(values: number[], result: number | null): PredictionSummary {
